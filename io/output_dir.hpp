@@ -1,0 +1,14 @@
+#pragma once
+/// The run or mesh output folder: created if missing, never silently reused for another study.
+#include <filesystem>
+#include <string>
+
+namespace veer {
+
+/// Prepares `dir` for the outputs of the case whose text is `case_text`.
+/// A missing or empty folder is created; a folder written earlier for the same case (its stamp file
+/// holds the same case text) is reused; any other non-empty folder is refused with an InputError
+/// unless `force` is set. Writes the stamp file.
+void prepare_output_dir(const std::filesystem::path& dir, const std::string& case_text, bool force);
+
+}  // namespace veer
