@@ -1,0 +1,22 @@
+#pragma once
+/// Reads and validates a TOML case file. Every error names the file, the line, the key, the value
+/// found and what is allowed.
+#include <filesystem>
+#include <string>
+#include <vector>
+
+#include "io/case_spec.hpp"
+
+namespace veer {
+
+/// Reads `path`, applies `overrides` ("table.key=value", the value in TOML syntax, e.g.
+/// "flow.alpha=6" or "geometry.naca=\"4412\"") and validates the result. Throws InputError.
+CaseSpec read_case_file(const std::filesystem::path& path,
+                        const std::vector<std::string>& overrides = {});
+
+/// Same, from text; `source` names it in messages and `base_dir` resolves relative paths.
+CaseSpec parse_case_text(const std::string& text, const std::string& source,
+                         const std::filesystem::path& base_dir,
+                         const std::vector<std::string>& overrides = {});
+
+}  // namespace veer

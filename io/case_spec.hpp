@@ -1,0 +1,53 @@
+#pragma once
+/// A study as the case file describes it: geometry, grid, flow, run and post-processing settings.
+#include <filesystem>
+#include <optional>
+#include <string>
+#include <vector>
+
+#include "mesh/cgrid_spec.hpp"
+#include "solver/flow_fields.hpp"
+
+namespace veer {
+
+/// [geometry]: a NACA designation or a coordinate file (exactly one of them).
+struct GeometrySpec {
+    std::string naca;                   ///< e.g. "0012", "23012"; empty when a file is used
+    std::filesystem::path coordinates;  ///< resolved against the case file's folder
+    bool closed_trailing_edge = false;  ///< NACA only: the closed-TE thickness variant
+    std::string name;                   ///< label for reports
+};
+
+/// [run]: how the solution is marched and written.
+struct RunSpec {
+    std::string mode = "steady";    ///< "steady" (pseudo-time to convergence) or "unsteady"
+    long steps = 20000;             ///< iteration cap
+    double end_time = 20.0;         ///< unsteady: chord / free-stream-speed units
+    double cfl = 0.0;               ///< 0: the solver's default for the mode
+    double residual_drop = 1e-6;    ///< steady: residuals must fall by this factor
+    double force_tolerance = 1e-5;  ///< steady: Cl, Cd change per 100 steps below this
+    long output_every = 0;          ///< field frame interval in steps; 0: first and last only
+    long checkpoint_every = 500;    ///< checkpoint interval in steps
+    std::string pressure_solver = "multigrid";  ///< "multigrid", "eigen-cg", "eigen-bicgstab"
+};
+
+/// [post]: where the control-volume contours and wake stations lie.
+struct PostSpec {
+    std::vector<double> contours = {0.5, 1.0, 2.0, 4.0};   ///< distances from the section, chords
+    std::vector<double> wake_stations = {0.25, 1.0, 3.0};  ///< chords behind the trailing edge
+};
+
+/// A whole case file, validated.
+struct CaseSpec {
+    std::filesystem::path path;  ///< the case file ("<command line>" for built-in cases)
+    std::string text;            ///< the file's text after command-line overrides
+    GeometrySpec geometry;
+    CGridSpec mesh;
+    std::optional<double> y_plus;  ///< set when [mesh] y_plus chose the first cell
+    FlowConditions flow;
+    std::string model = "laminar";  ///< "laminar" or "spalart-allmaras"
+    RunSpec run;
+    PostSpec post;
+};
+
+}  // namespace veer
