@@ -1,0 +1,146 @@
+// Case-file reading: the documented keys, defaults, and one-line errors naming file, line and key.
+#include <gtest/gtest.h>
+
+#include <filesystem>
+#include <fstream>
+
+#include "io/case_file.hpp"
+#include "mesh/errors.hpp"
+
+namespace veer {
+namespace {
+
+const char* minimal_case = R"([geometry]
+naca = "0012"
+[mesh]
+around = 128
+normal = 32
+wake = 24
+far_field = 30
+first_cell = 2e-4
+[flow]
+reynolds = 1000
+alpha = 4.0
+model = "laminar"
+)";
+
+/// The message of the InputError that parsing `text` throws ("" if none).
+std::string error_of(const std::string& text, std::vector<std::string> overrides = {}) {
+    try {
+        parse_case_text(text, "case.toml", ".", overrides);
+    } catch (const InputError& e) {
+        return e.what();
+    }
+    return "";
+}
+
+TEST(CaseFile, ReadsTheDocumentedKeys) {
+    const CaseSpec c = parse_case_text(minimal_case, "case.toml", ".");
+    EXPECT_EQ(c.geometry.naca, "0012");
+    EXPECT_EQ(c.mesh.around, 128);
+    EXPECT_EQ(c.mesh.normal, 32);
+    EXPECT_EQ(c.mesh.wake, 24);
+    EXPECT_DOUBLE_EQ(c.mesh.far_field, 30.0);
+    EXPECT_DOUBLE_EQ(c.mesh.first_cell, 2e-4);
+    EXPECT_DOUBLE_EQ(c.flow.reynolds, 1000.0);
+    EXPECT_DOUBLE_EQ(c.flow.alpha_deg, 4.0);
+    EXPECT_EQ(c.model, "laminar");
+    EXPECT_EQ(c.run.mode, "steady");
+    EXPECT_EQ(c.text, minimal_case);
+}
+
+TEST(CaseFile, WakeDefaultsToThreeSixteenthsOfAround) {
+    const CaseSpec c = parse_case_text(
+        "[geometry]\nnaca = \"4412\"\n[mesh]\naround = 512\n"
+        "[flow]\nreynolds = 500\n",
+        "case.toml", ".");
+    EXPECT_EQ(c.mesh.wake, 96);
+}
+
+TEST(CaseFile, UnknownKeyNamesFileLineAndKey) {
+    std::string text = minimal_case;
+    text.insert(text.find("[flow]"), "bogus_key = 3\n");
+    const std::string msg = error_of(text);
+    EXPECT_NE(msg.find("case.toml:9"), std::string::npos) << msg;
+    EXPECT_NE(msg.find("bogus_key"), std::string::npos) << msg;
+    EXPECT_NE(msg.find("allowed keys"), std::string::npos) << msg;
+}
+
+TEST(CaseFile, WrongTypeAndOutOfRangeNameTheAllowedValues) {
+    std::string text = minimal_case;
+    text.replace(text.find("around = 128"), 12, "around = \"many\"");
+    std::string msg = error_of(text);
+    EXPECT_NE(msg.find("case.toml:4"), std::string::npos) << msg;
+    EXPECT_NE(msg.find("an integer"), std::string::npos) << msg;
+
+    text = minimal_case;
+    text.replace(text.find("alpha = 4.0"), 11, "alpha = 120");
+    msg = error_of(text);
+    EXPECT_NE(msg.find("case.toml:11"), std::string::npos) << msg;
+    EXPECT_NE(msg.find("-90 to 90"), std::string::npos) << msg;
+
+    text = minimal_case;
+    text.replace(text.find("around = 128"), 12, "around = 127");
+    EXPECT_NE(error_of(text).find("even"), std::string::npos);
+
+    text = minimal_case;
+    text.replace(text.find("\"laminar\""), 9, "\"k-omega\"");
+    EXPECT_NE(error_of(text).find("spalart-allmaras"), std::string::npos);
+}
+
+TEST(CaseFile, GeometryNeedsExactlyOneSource) {
+    std::string text = minimal_case;
+    text.replace(text.find("naca = \"0012\""), 13, "");
+    EXPECT_NE(error_of(text).find("exactly one of"), std::string::npos);
+    text = minimal_case;
+    text.replace(text.find("naca = \"0012\""), 13, "naca = \"12a4\"");
+    EXPECT_NE(error_of(text).find("four digits"), std::string::npos);
+}
+
+TEST(CaseFile, CoordinatePathsAreRelativeToTheCaseFile) {
+    const auto dir = std::filesystem::temp_directory_path() / "veer_case_file_test";
+    std::filesystem::create_directories(dir);
+    std::ofstream(dir / "section.dat") << "1 0\n0 0\n";
+    std::ofstream(dir / "c.toml") << "[geometry]\ncoordinates = \"section.dat\"\n[flow]\n"
+                                     "reynolds = 1e4\n";
+    const CaseSpec c = read_case_file(dir / "c.toml");
+    EXPECT_EQ(c.geometry.coordinates, dir / "section.dat");
+    std::ofstream(dir / "d.toml") << "[geometry]\ncoordinates = \"nowhere.dat\"\n[flow]\n"
+                                     "reynolds = 1e4\n";
+    try {
+        read_case_file(dir / "d.toml");
+        FAIL() << "a missing coordinate file was accepted";
+    } catch (const InputError& e) {
+        EXPECT_NE(std::string(e.what()).find("d.toml:2"), std::string::npos) << e.what();
+    }
+}
+
+TEST(CaseFile, CommandLineOverridesReplaceValues) {
+    const CaseSpec c =
+        parse_case_text(minimal_case, "case.toml", ".", {"flow.alpha=-6", "run.mode=unsteady"});
+    EXPECT_DOUBLE_EQ(c.flow.alpha_deg, -6.0);
+    EXPECT_EQ(c.run.mode, "unsteady");
+    EXPECT_NE(c.text.find("unsteady"), std::string::npos);
+    EXPECT_NE(error_of(minimal_case, {"flow.alpha"}).find("table.key=value"), std::string::npos);
+    EXPECT_NE(error_of(minimal_case, {"mesh.nonsense=3"}).find("nonsense"), std::string::npos);
+}
+
+TEST(CaseFile, SpalartAllmarasDefaultsToYPlusOne) {
+    const CaseSpec c = parse_case_text(
+        "[geometry]\nnaca = \"0012\"\n[flow]\nreynolds = 6e6\n"
+        "model = \"spalart-allmaras\"\n",
+        "case.toml", ".");
+    ASSERT_TRUE(c.y_plus.has_value());
+    EXPECT_DOUBLE_EQ(*c.y_plus, 1.0);
+    EXPECT_NE(error_of(std::string(minimal_case) + "[post]\ncontours = [0.5, 50]\n")
+                  .find("outside the grid"),
+              std::string::npos);
+}
+
+TEST(CaseFile, InvalidTomlGivesLine) {
+    const std::string msg = error_of("[geometry]\nnaca = \"0012\n");
+    EXPECT_NE(msg.find("case.toml:2"), std::string::npos) << msg;
+}
+
+}  // namespace
+}  // namespace veer
