@@ -1,0 +1,80 @@
+#include "io/coordinate_file.hpp"
+
+#include <charconv>
+#include <cmath>
+#include <fstream>
+#include <optional>
+#include <string>
+
+#include "mesh/errors.hpp"
+
+namespace veer {
+namespace {
+
+std::string trim(const std::string& text) {
+    const auto first = text.find_first_not_of(" \t\r\f\v");
+    if (first == std::string::npos) return {};
+    const auto last = text.find_last_not_of(" \t\r\f\v");
+    return text.substr(first, last - first + 1);
+}
+
+/// The two finite numbers of a line "x y" or "x, y"; empty if the line is anything else.
+std::optional<Vec2> parse_pair(const std::string& line) {
+    std::string text = line;
+    for (char& c : text) {
+        if (c == ',' || c == '\t') c = ' ';
+    }
+    double values[2] = {0.0, 0.0};
+    const char* at = text.data();
+    const char* end = text.data() + text.size();
+    for (double& v : values) {
+        while (at < end && *at == ' ') ++at;
+        if (at < end && *at == '+') ++at;  // from_chars does not take a leading '+'
+        const auto result = std::from_chars(at, end, v);
+        if (result.ec != std::errc() || !std::isfinite(v)) return std::nullopt;
+        at = result.ptr;
+        if (at < end && *at != ' ') return std::nullopt;  // e.g. "0.5abc"
+    }
+    while (at < end && *at == ' ') ++at;
+    if (at != end) return std::nullopt;
+    return Vec2{values[0], values[1]};
+}
+
+}  // namespace
+
+RawOutline read_coordinate_file(const std::filesystem::path& path) {
+    const std::string name = path.string();
+    std::ifstream in(path);
+    if (!in) throw InputError(name + ": cannot open");
+    RawOutline raw;
+    raw.source = name;
+    std::string line;
+    int number = 0;
+    bool title_allowed = true;
+    bool had_title = false;
+    while (std::getline(in, line)) {
+        ++number;
+        const std::string text = trim(line);
+        if (text.empty() || text.front() == '#') continue;
+        const std::optional<Vec2> point = parse_pair(text);
+        if (!point) {
+            if (title_allowed) {
+                title_allowed = false;
+                had_title = true;
+                continue;
+            }
+            throw InputError(name + ":" + std::to_string(number) +
+                             ": expected two numbers \"x y\", found \"" + text + "\"");
+        }
+        title_allowed = false;
+        raw.points.push_back(*point);
+        raw.lines.push_back(number);
+    }
+    if (raw.points.empty()) {
+        throw InputError(name + (had_title ? ": no coordinates found (only a title line)"
+                                           : ": no coordinates found (empty file)"));
+    }
+    return raw;
+}
+
+}  // namespace veer
