@@ -1,0 +1,124 @@
+#pragma once
+/// Exact potential flows for the post-processing tests, in veer's units (chord 1, U_inf = 1,
+/// rho = 1) and sign convention (circulation gamma > 0 clockwise, which lifts for flow along +x).
+#include <cmath>
+#include <complex>
+#include <functional>
+#include <numbers>
+#include <vector>
+
+#include "mesh/grid_metrics.hpp"
+#include "mesh/vec2.hpp"
+#include "solver/flow_fields.hpp"
+
+namespace veer::test {
+
+using Complex = std::complex<double>;
+using VelocityField = std::function<Vec2(Vec2)>;
+
+/// Uniform stream at angle alpha plus a clockwise point vortex of circulation gamma at `centre`.
+inline VelocityField uniform_plus_vortex(double alpha_deg, double gamma, Vec2 centre) {
+    const double a = alpha_deg * std::numbers::pi / 180.0;
+    return [=](Vec2 p) {
+        const Vec2 r = p - centre;
+        const double k = gamma / (2.0 * std::numbers::pi * dot(r, r));
+        return Vec2{std::cos(a) + k * r.y, std::sin(a) - k * r.x};
+    };
+}
+
+/// Joukowski section z = zeta + b^2/zeta about the circle of centre (-mu_x, mu_y) through
+/// zeta = b, with the Kutta circulation gamma = 4 pi a U sin(alpha + beta) (Kutta 1902, Joukowski
+/// 1906; e.g. Katz & Plotkin, Low-Speed Aerodynamics). Veer coordinates are
+/// x = (z - z_le) / c with the trailing edge z = 2b at (1, 0).
+struct Joukowski {
+    double b = 1.0, mu_x = 0.1, mu_y = 0.0, alpha_deg = 5.0;
+
+    Complex centre() const { return {-mu_x, mu_y}; }
+    double radius() const { return std::hypot(b + mu_x, mu_y); }
+    double alpha() const { return alpha_deg * std::numbers::pi / 180.0; }
+    double beta() const { return std::asin(mu_y / radius()); }
+    /// Circulation in the physical plane (unscaled), clockwise positive.
+    double gamma_physical() const {
+        return 4.0 * std::numbers::pi * radius() * std::sin(alpha() + beta());
+    }
+    Complex map(Complex zeta) const { return zeta + b * b / zeta; }
+    Complex zeta_on_circle(double theta) const {
+        return centre() + radius() * std::exp(Complex(0.0, theta));
+    }
+    /// Leading edge: the contour point farthest from the trailing edge (sampled finely).
+    Complex leading_edge() const {
+        Complex best = map(zeta_on_circle(std::numbers::pi));
+        for (int k = -2000; k <= 2000; ++k) {
+            const Complex z = map(zeta_on_circle(std::numbers::pi * (1.0 + k * 5e-5)));
+            if (std::abs(z - 2.0 * b) > std::abs(best - 2.0 * b)) best = z;
+        }
+        return best;
+    }
+    double chord() const { return std::abs(2.0 * b - leading_edge()); }
+    /// Exact section lift coefficient, 2 gamma / (U c).
+    double lift_coefficient() const { return 2.0 * gamma_physical() / chord(); }
+
+    /// Fixes the leading edge and chord once (call after setting the parameters).
+    Joukowski& prepare() {
+        m_le = leading_edge();
+        m_chord = chord();
+        return *this;
+    }
+    Complex m_le{0.0, 0.0};
+    double m_chord = 1.0;
+
+    Vec2 to_veer(Complex z) const {
+        const Complex x = (z - m_le) / m_chord;
+        return {x.real(), x.imag()};
+    }
+    Complex to_physical(Vec2 p) const { return m_le + m_chord * Complex(p.x, p.y); }
+
+    /// Section outline, trailing edge first and last, around + 1 points clustered at both ends.
+    std::vector<Vec2> surface(int around) const {
+        const double theta_te = std::arg(Complex(b, 0.0) - centre());
+        std::vector<Vec2> pts;
+        for (int m = 0; m <= around; ++m)
+            pts.push_back(
+                to_veer(map(zeta_on_circle(theta_te - 2.0 * std::numbers::pi * m / around))));
+        pts.front() = pts.back() = to_veer(Complex(2.0 * b, 0.0));
+        return pts;
+    }
+
+    /// Exact velocity at a veer point outside the section (the velocity scale is unchanged).
+    Vec2 velocity(Vec2 p) const {
+        const Complex z = to_physical(p);
+        const Complex root = std::sqrt(z * z - 4.0 * b * b);
+        Complex zeta = 0.5 * (z + root);
+        const Complex other = 0.5 * (z - root);
+        if (std::abs(other - centre()) > std::abs(zeta - centre())) zeta = other;
+        const Complex s = zeta - centre();
+        const double a = radius();
+        const Complex dw = std::exp(Complex(0.0, -alpha())) -
+                           a * a * std::exp(Complex(0.0, alpha())) / (s * s) +
+                           Complex(0.0, gamma_physical() / (2.0 * std::numbers::pi)) / s;
+        const Complex w = dw / (1.0 - b * b / (zeta * zeta));  // u - i v
+        return {w.real(), -w.imag()};
+    }
+};
+
+/// Cell-centred fields of a potential flow: velocity at the centroids, Bernoulli pressure
+/// p - p_inf = (1 - |u|^2) / 2, no eddy viscosity.
+inline FlowFields sample_potential_flow(const GridMetrics& m, const VelocityField& velocity) {
+    FlowFields f;
+    f.ni = m.ni;
+    f.nj = m.nj;
+    const std::size_t n = m.volume.size();
+    f.u.resize(n);
+    f.v.resize(n);
+    f.pressure.resize(n);
+    f.eddy_viscosity.assign(n, 0.0);
+    for (std::size_t c = 0; c < n; ++c) {
+        const Vec2 u = velocity(m.centroid[c]);
+        f.u[c] = u.x;
+        f.v[c] = u.y;
+        f.pressure[c] = 0.5 * (1.0 - dot(u, u));
+    }
+    return f;
+}
+
+}  // namespace veer::test
