@@ -118,10 +118,13 @@ double ParametricSpline::nearest_parameter(Vec2 p) const {
             }
         }
     }
+    // bracket: the sample spacing either side of the best sample, on whichever pieces hold it
     const std::size_t k = segment(best_s);
-    const double h = m_knots[k + 1] - m_knots[k];
-    const double lo = std::max(0.0, best_s - h / samples * 1.5);
-    const double hi = std::min(length(), best_s + h / samples * 1.5);
+    const double h_before =
+        k > 0 && best_s == m_knots[k] ? m_knots[k] - m_knots[k - 1] : m_knots[k + 1] - m_knots[k];
+    const double h_after = m_knots[k + 1] - m_knots[k];
+    const double lo = std::max(0.0, best_s - 1.5 * h_before / samples);
+    const double hi = std::min(length(), best_s + 1.5 * h_after / samples);
     double s = best_s;
     for (int it = 0; it < 40; ++it) {
         const Vec2 r = position(s) - p;
