@@ -1,0 +1,228 @@
+// make_section: normalisation, either ordering, blunt trailing edges and every refused outline.
+#include <gtest/gtest.h>
+
+#include <cmath>
+#include <numbers>
+
+#include "mesh/errors.hpp"
+#include "mesh/naca.hpp"
+#include "mesh/section_builder.hpp"
+
+namespace veer {
+namespace {
+
+/// A generated outline with its leading-edge hint removed, as a file would give it.
+RawOutline as_file(RawOutline raw) {
+    raw.leading_edge.reset();
+    return raw;
+}
+
+std::string error_of(const RawOutline& raw) {
+    try {
+        make_section(raw, "test");
+    } catch (const InputError& e) {
+        return e.what();
+    }
+    return "(no error)";
+}
+
+void expect_contains(const std::string& text, const std::string& part) {
+    EXPECT_NE(text.find(part), std::string::npos) << "'" << part << "' not in: " << text;
+}
+
+double max_distance(const Section& a, const Section& b) {
+    EXPECT_EQ(a.points.size(), b.points.size());
+    double worst = 0.0;
+    for (std::size_t k = 0; k < std::min(a.points.size(), b.points.size()); ++k) {
+        worst = std::max(worst, norm(a.points[k] - b.points[k]));
+    }
+    return worst;
+}
+
+TEST(SectionBuilder, SharpSectionIsNormalisedAndOrdered) {
+    const Section s = make_section(naca_outline("2412", TrailingEdge::closed), "drone wing");
+    EXPECT_EQ(s.name, "drone wing");
+    ASSERT_EQ(s.points.size(), 321u);  // a sharp source gains no points
+    EXPECT_EQ(s.leading_edge, 160u);
+    EXPECT_EQ(s.source_te_gap, 0.0);
+    EXPECT_EQ(s.points.front().x, 1.0);
+    EXPECT_EQ(s.points.front().y, 0.0);
+    EXPECT_EQ(s.points.back().x, 1.0);
+    EXPECT_EQ(s.points.back().y, 0.0);
+    EXPECT_EQ(s.points[s.leading_edge].x, 0.0);
+    EXPECT_EQ(s.points[s.leading_edge].y, 0.0);
+    // lower surface first: at mid-chord the first half is below the second
+    EXPECT_LT(s.points[80].y, s.points[240].y);
+    for (const Vec2& p : s.points) {
+        // the formula's upper surface runs ahead of its nose by y_t sin(theta), under 1e-4 here
+        EXPECT_GE(p.x, -1e-4);
+        EXPECT_LE(p.x, 1.0 + 1e-12);
+    }
+}
+
+TEST(SectionBuilder, EitherOrderingGivesTheSameSection) {
+    // the same points listed upper surface first (counter-clockwise) must give the same Section;
+    // the operations differ only in order, so round-off (1e-15) is the tolerance
+    const RawOutline lower_first = as_file(naca_outline("4412", TrailingEdge::closed, 81));
+    RawOutline upper_first = lower_first;
+    std::reverse(upper_first.points.begin(), upper_first.points.end());
+    const Section a = make_section(lower_first, "a");
+    const Section b = make_section(upper_first, "b");
+    EXPECT_EQ(a.leading_edge, b.leading_edge);
+    EXPECT_LT(max_distance(a, b), 1e-15);
+    // and with the hint of the generator, reversed along with the points
+    RawOutline hinted = naca_outline("4412", TrailingEdge::open, 81);
+    const Section c = make_section(hinted, "c");
+    std::reverse(hinted.points.begin(), hinted.points.end());
+    hinted.leading_edge = hinted.points.size() - 1 - *hinted.leading_edge;
+    EXPECT_LT(max_distance(c, make_section(hinted, "d")), 1e-15);
+}
+
+TEST(SectionBuilder, LeadingEdgeFoundWithoutAHint) {
+    // symmetric: the farthest point from the trailing edge is the nose, so hint or no hint the
+    // Section is the same, bit for bit
+    const Section hinted = make_section(naca_outline("0012", TrailingEdge::open), "h");
+    const Section found = make_section(as_file(naca_outline("0012", TrailingEdge::open)), "f");
+    EXPECT_EQ(found.leading_edge, hinted.leading_edge);
+    EXPECT_EQ(max_distance(found, hinted), 0.0);
+    // cambered: the farthest point lies a little off the formula's nose (common practice
+    // definition); it must still be near the nose and on the outline's smooth nose region
+    const Section cambered = make_section(as_file(naca_outline("4412", TrailingEdge::open)), "c");
+    EXPECT_EQ(cambered.points[cambered.leading_edge].x, 0.0);
+    EXPECT_EQ(cambered.points[cambered.leading_edge].y, 0.0);
+    for (const Vec2& p : cambered.points) EXPECT_GE(p.x, -1e-12);  // nothing ahead of the LE
+}
+
+TEST(SectionBuilder, InvariantUnderRotationScaleAndShift) {
+    // a file in other units and attitude (chord 250 mm, pitched 12 deg, offset) gives the same
+    // Section: the leading edge is found geometrically. Round-off of the transforms and of the
+    // Newton refinement of the leading edge: 1e-9.
+    const RawOutline raw = as_file(naca_outline("2412", TrailingEdge::open, 121));
+    RawOutline moved = raw;
+    const double a = 12.0 * std::numbers::pi / 180.0;
+    for (Vec2& p : moved.points) {
+        p = {250.0 * (std::cos(a) * p.x - std::sin(a) * p.y) + 40.0,
+             250.0 * (std::sin(a) * p.x + std::cos(a) * p.y) - 7.0};
+    }
+    const Section s0 = make_section(raw, "a");
+    const Section s1 = make_section(moved, "b");
+    EXPECT_EQ(s0.leading_edge, s1.leading_edge);
+    EXPECT_LT(max_distance(s0, s1), 1e-9);
+    EXPECT_NEAR(s0.source_te_gap, s1.source_te_gap, 1e-12);
+}
+
+TEST(SectionBuilder, BluntTrailingEdgeIsClosedWithAWedge) {
+    // open 0012: gap 0.00252 chord (Abbott & von Doenhoff 1959 [T]); the surfaces' last segments
+    // meet about 0.009 chord behind the base (half-angle 8 deg), well within the allowed reach.
+    const Section s = make_section(naca_outline("0012", TrailingEdge::open), "blunt");
+    ASSERT_EQ(s.points.size(), 323u);  // the tip is added first and last
+    EXPECT_NEAR(s.source_te_gap, 0.00252, 5e-6);
+    EXPECT_EQ(s.points.front().x, 1.0);
+    EXPECT_EQ(s.points.back().y, 0.0);
+    const Vec2 lower_base = s.points[1], upper_base = s.points[s.points.size() - 2];
+    EXPECT_NEAR(lower_base.x, upper_base.x, 1e-15);
+    EXPECT_NEAR(lower_base.y, -upper_base.y, 1e-15);
+    EXPECT_GT(lower_base.x, 0.985);
+    EXPECT_LT(lower_base.x, 0.995);
+    // the wedge continues the surface directions: the angle between the base-to-tip segment and
+    // the last surface segment is round-off small
+    const Vec2 last = lower_base - s.points[2];
+    const Vec2 wedge = s.points[0] - lower_base;
+    EXPECT_NEAR(cross(last, wedge) / (norm(last) * norm(wedge)), 0.0, 1e-9);
+}
+
+TEST(SectionBuilder, ThickBaseIsClosedDownstreamOfItsMidpoint) {
+    // 0012 cut at x = 0.9: base 0.0208 thick, surfaces converging at 7 deg would meet 0.08 chord
+    // behind, beyond the 0.02 reach: the tip goes one base height behind the base midpoint.
+    RawOutline raw = naca_outline("0012", TrailingEdge::open, 161);
+    std::vector<Vec2> cut;
+    for (const Vec2& p : raw.points) {
+        if (p.x <= 0.9) cut.push_back(p);
+    }
+    raw.points = cut;
+    raw.leading_edge.reset();
+    const double base = norm(cut.back() - cut.front());
+    const double chord0 = 0.5 * (cut.front().x + cut.back().x);
+    const Section s = make_section(raw, "cut");
+    EXPECT_NEAR(s.source_te_gap, base / chord0, 1e-12);
+    const double scale = 1.0 / (chord0 + base);
+    EXPECT_NEAR(s.points[1].x, chord0 * scale, 1e-12);
+    EXPECT_NEAR(s.points[1].y, -0.5 * base * scale, 1e-12);
+}
+
+TEST(SectionBuilder, TooFewPointsAreRefused) {
+    RawOutline raw;
+    raw.points = {{1, 0}, {0.5, 0.05}, {0, 0}, {0.5, -0.05}, {1, 0}};
+    raw.source = "five.dat";
+    EXPECT_EQ(error_of(raw), "five.dat: a section outline needs at least 20 points, found 5");
+}
+
+TEST(SectionBuilder, RepeatedPointIsRefusedWithItsLine) {
+    RawOutline raw = as_file(naca_outline("0012", TrailingEdge::open, 41));
+    raw.points.insert(raw.points.begin() + 30, raw.points[30]);
+    raw.source = "repeat.dat";
+    for (std::size_t k = 0; k < raw.points.size(); ++k)
+        raw.lines.push_back(static_cast<int>(k) + 2);
+    const std::string e = error_of(raw);
+    expect_contains(e, "repeat.dat:33:");  // point index 31, one title line before the first
+    expect_contains(e, "repeats the previous one");
+    // generated outlines name the point instead
+    raw.lines.clear();
+    expect_contains(error_of(raw), "repeat.dat (point 32)");
+}
+
+TEST(SectionBuilder, OpenLoopIsRefusedWithTheTolerance) {
+    RawOutline raw = as_file(naca_outline("0012", TrailingEdge::open, 61));
+    raw.points.resize(raw.points.size() - 20);  // stops at mid upper surface
+    raw.source = "half.dat";
+    const std::string e = error_of(raw);
+    expect_contains(e, "half.dat: the outline is not one closed loop");
+    expect_contains(e, "at most 0.05 allowed");
+}
+
+TEST(SectionBuilder, FigureEightIsRefusedAsSelfIntersecting) {
+    // x = 0.5 + 0.5 cos t, y = 0.1 sin 2t, 60 points: the two lobes cross at (0.5, 0)
+    RawOutline raw;
+    raw.source = "eight.dat";
+    for (int k = 0; k < 60; ++k) {
+        const double t = 2.0 * std::numbers::pi * k / 60;
+        raw.points.push_back({0.5 + 0.5 * std::cos(t), 0.1 * std::sin(2.0 * t)});
+        raw.lines.push_back(k + 1);
+    }
+    const std::string e = error_of(raw);
+    expect_contains(e, "eight.dat: the outline crosses itself");
+    expect_contains(e, "lines 15 and 16");  // t just before pi/2 runs into the crossing
+}
+
+TEST(SectionBuilder, CrossingIsFoundInALargeOutline) {
+    // 1001 points; the upper surface dips smoothly (no sharp turn) through the lower one
+    // between x = 0.4 and 0.6
+    RawOutline raw = as_file(naca_outline("0012", TrailingEdge::open, 501));
+    for (std::size_t k = 501; k < raw.points.size(); ++k) {
+        Vec2& p = raw.points[k];
+        if (p.x > 0.4 && p.x < 0.6)
+            p.y -= 0.2 * std::pow(std::sin((p.x - 0.4) / 0.2 * std::numbers::pi), 2);
+    }
+    raw.source = "dented.dat";
+    expect_contains(error_of(raw), "dented.dat: the outline crosses itself");
+}
+
+TEST(SectionBuilder, SharpReversalIsRefused) {
+    // a spike: one lower-surface point thrown back upstream makes the outline double back
+    RawOutline raw = as_file(naca_outline("0012", TrailingEdge::open, 61));
+    raw.points[20] = raw.points[19] + 3.0 * (raw.points[18] - raw.points[19]);
+    raw.source = "spike.dat";
+    const std::string e = error_of(raw);
+    expect_contains(e, "spike.dat (point 20): the outline doubles back on itself");
+    expect_contains(e, "at most 150 allowed");
+}
+
+TEST(SectionBuilder, ErrorsAreOneLine) {
+    RawOutline raw = as_file(naca_outline("0012", TrailingEdge::open, 61));
+    raw.points.resize(60);
+    raw.source = "short.dat";
+    EXPECT_EQ(error_of(raw).find('\n'), std::string::npos);
+}
+
+}  // namespace
+}  // namespace veer
