@@ -1,0 +1,120 @@
+// sample_surface: node count and placement, exact mirror symmetry, smooth clustered spacing.
+#include <gtest/gtest.h>
+
+#include <cmath>
+
+#include "mesh/errors.hpp"
+#include "mesh/naca.hpp"
+#include "mesh/section_builder.hpp"
+#include "mesh/spline.hpp"
+#include "mesh/surface_sampling.hpp"
+
+namespace veer {
+namespace {
+
+Section naca(const char* digits, TrailingEdge te) {
+    return make_section(naca_outline(digits, te), digits);
+}
+
+double spacing(const std::vector<Vec2>& n, std::size_t i) { return norm(n[i + 1] - n[i]); }
+
+double worst_neighbour_ratio(const std::vector<Vec2>& n) {
+    double worst = 1.0;
+    for (std::size_t i = 1; i + 1 < n.size(); ++i) {
+        const double r = spacing(n, i) / spacing(n, i - 1);
+        worst = std::max({worst, r, 1.0 / r});
+    }
+    return worst;
+}
+
+TEST(SurfaceSampling, NodeCountAndFixedNodes) {
+    for (int around : {8, 64, 256, 400}) {
+        const Section s = naca("4412", TrailingEdge::open);
+        const std::vector<Vec2> n = sample_surface(s, around);
+        ASSERT_EQ(n.size(), static_cast<std::size_t>(around) + 1);
+        EXPECT_EQ(n.front().x, 1.0);
+        EXPECT_EQ(n.front().y, 0.0);
+        EXPECT_EQ(n.back().x, 1.0);
+        EXPECT_EQ(n.back().y, 0.0);
+        const Vec2 le = n[static_cast<std::size_t>(around / 2)];
+        EXPECT_EQ(le.x, 0.0);
+        EXPECT_EQ(le.y, 0.0);
+        // lower surface first: the node a quarter of the way round is below the one three quarters
+        EXPECT_LT(n[static_cast<std::size_t>(around / 4)].y,
+                  n[static_cast<std::size_t>(3 * around / 4)].y);
+    }
+}
+
+TEST(SurfaceSampling, SymmetricSectionGivesAnExactMirrorImage) {
+    // both halves go through the same operations on mirrored data: equality, not a tolerance
+    for (TrailingEdge te : {TrailingEdge::open, TrailingEdge::closed}) {
+        const std::vector<Vec2> n = sample_surface(naca("0012", te), 256);
+        for (std::size_t i = 0; i < n.size(); ++i) {
+            const Vec2 mirror = n[n.size() - 1 - i];
+            EXPECT_EQ(n[i].x, mirror.x) << i;
+            EXPECT_EQ(n[i].y, -mirror.y) << i;
+        }
+    }
+}
+
+TEST(SurfaceSampling, NodesLieOnTheSectionSpline) {
+    // each node is a point of the spline through the section points; the lower half is computed
+    // on the reversed outline, the same spline up to round-off: 1e-9 is far above that (1e-15)
+    for (const char* digits : {"0012", "4412", "23012"}) {
+        const Section s = naca(digits, TrailingEdge::open);
+        const ParametricSpline spline(s.points);
+        double worst = 0.0;
+        for (const Vec2& p : sample_surface(s, 256)) {
+            worst = std::max(worst, norm(spline.position(spline.nearest_parameter(p)) - p));
+        }
+        EXPECT_LT(worst, 1e-9) << digits;
+    }
+}
+
+TEST(SurfaceSampling, SpacingIsSmoothAndClustered) {
+    // the rule limits the spacing slope to 0.1, so neighbouring spacings differ by about 10%
+    // (measured 1.105-1.107); the bound is the ~20% asked of a wall grid (common practice)
+    for (const char* digits : {"0012", "4412", "23012", "0006", "0024"}) {
+        for (int around : {128, 256, 512}) {
+            const std::vector<Vec2> n = sample_surface(naca(digits, TrailingEdge::open), around);
+            EXPECT_LT(worst_neighbour_ratio(n), 1.2) << digits << " around " << around;
+            for (std::size_t i = 0; i + 1 < n.size(); ++i) EXPECT_GT(spacing(n, i), 0.0);
+        }
+    }
+    // 0012 at 256: leading- and trailing-edge spacings of 0.002-0.004 chord (common practice);
+    // measured 0.0025 at the leading edge and 0.0026 at the trailing edge
+    const std::vector<Vec2> n = sample_surface(naca("0012", TrailingEdge::open), 256);
+    for (std::size_t i : {std::size_t{0}, std::size_t{127}, std::size_t{128}, std::size_t{255}}) {
+        EXPECT_GT(spacing(n, i), 0.002) << i;
+        EXPECT_LT(spacing(n, i), 0.004) << i;
+    }
+    // clustered: the largest spacing, mid-chord, is several times the edge spacings
+    double largest = 0.0;
+    for (std::size_t i = 0; i + 1 < n.size(); ++i) largest = std::max(largest, spacing(n, i));
+    EXPECT_GT(largest, 2.5 * spacing(n, 128));
+}
+
+TEST(SurfaceSampling, ThinnerNoseGetsFinerSpacing) {
+    // clustering follows curvature: the 0006 nose (radius 0.004) gets finer cells than the 0024
+    // nose (radius 0.063)
+    const std::vector<Vec2> thin = sample_surface(naca("0006", TrailingEdge::closed), 256);
+    const std::vector<Vec2> thick = sample_surface(naca("0024", TrailingEdge::closed), 256);
+    EXPECT_LT(spacing(thin, 128), 0.5 * spacing(thick, 128));
+}
+
+TEST(SurfaceSampling, OddOrTinyCountIsRefused) {
+    const Section s = naca("0012", TrailingEdge::closed);
+    for (int bad : {255, 6, 0, -4}) {
+        try {
+            sample_surface(s, bad);
+            ADD_FAILURE() << "accepted around = " << bad;
+        } catch (const InputError& e) {
+            const std::string what = e.what();
+            EXPECT_EQ(what.rfind("around = " + std::to_string(bad) + ":", 0), 0u) << what;
+            EXPECT_NE(what.find("even"), std::string::npos) << what;
+        }
+    }
+}
+
+}  // namespace
+}  // namespace veer
