@@ -88,7 +88,9 @@ void check_reversals(const RawOutline& raw) {
             out << outline_location(raw, k) << ": the outline doubles back on itself at "
                 << format_point(p[k]) << " (turns by "
                 << std::acos(std::max(-1.0, c)) * 180.0 / std::numbers::pi << " degrees; at most "
-                << OutlineTolerances::max_turn_degrees << " allowed away from the trailing edge)";
+                << OutlineTolerances::max_turn_degrees
+                << " allowed away from the trailing edge; the points must start and end at the "
+                   "trailing edge)";
             throw InputError(out.str());
         }
     }
