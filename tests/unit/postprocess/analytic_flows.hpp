@@ -45,16 +45,17 @@ struct Joukowski {
     Complex zeta_on_circle(double theta) const {
         return centre() + radius() * std::exp(Complex(0.0, theta));
     }
-    /// Leading edge: the contour point farthest from the trailing edge (sampled finely).
+    /// Leading edge: the contour point of least x (sampled finely); the chord is then the x extent,
+    /// as in the worked values of analytic.md.
     Complex leading_edge() const {
         Complex best = map(zeta_on_circle(std::numbers::pi));
         for (int k = -2000; k <= 2000; ++k) {
             const Complex z = map(zeta_on_circle(std::numbers::pi * (1.0 + k * 5e-5)));
-            if (std::abs(z - 2.0 * b) > std::abs(best - 2.0 * b)) best = z;
+            if (z.real() < best.real()) best = z;
         }
         return best;
     }
-    double chord() const { return std::abs(2.0 * b - leading_edge()); }
+    double chord() const { return 2.0 * b - leading_edge().real(); }
     /// Exact section lift coefficient, 2 gamma / (U c).
     double lift_coefficient() const { return 2.0 * gamma_physical() / chord(); }
 
