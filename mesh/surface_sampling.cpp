@@ -10,7 +10,7 @@ namespace veer {
 namespace {
 
 /// The spacing rule, per half (leading edge to trailing edge), in spline parameter sigma:
-///   target(sigma) = c / (1 + curvature_length * |kappa(sigma)|)   cells shrink where the surface
+///   target(sigma) = c / (1 + curvature_length * kappa(sigma))       cells shrink where the surface
 ///                                                                 bends (the leading edge);
 ///   target(TE)    = c / (1 + curvature_length * max |kappa|)      the trailing-edge cell matches
 ///                                                                 the leading-edge one;
@@ -20,6 +20,19 @@ namespace {
 constexpr double curvature_length = 0.04;  ///< chords; sets how strongly curvature clusters
 constexpr double max_slope = 0.1;          ///< neighbouring spacing ratio about 1.1
 constexpr int samples_per_cell = 40;       ///< fine samples of the spacing function
+/// Curvature is measured as the tangent's turn over +-curvature_window (chords) divided by the
+/// window: the nose (radius >= 0.004 for a 6% section) is resolved, while the wiggles a spline
+/// makes through coordinates rounded to 6 decimals at 1e-5 spacing are averaged away.
+constexpr double curvature_window = 0.0025;
+
+/// Mean |curvature| over [s - w, s + w] (clamped to the spline): the tangent's turn over the
+/// window.
+double window_curvature(const ParametricSpline& spline, double s) {
+    const double a = std::max(0.0, s - curvature_window);
+    const double b = std::min(spline.length(), s + curvature_window);
+    const Vec2 ta = spline.first_derivative(a), tb = spline.first_derivative(b);
+    return std::abs(std::atan2(cross(ta, tb), dot(ta, tb))) / (b - a);
+}
 
 struct SpacingTable {
     std::vector<double> sigma;   ///< fine samples from 0 (leading edge) to the half length
@@ -33,7 +46,7 @@ SpacingTable spacing_targets(const ParametricSpline& spline, double s_le, int ce
     double max_curvature = 0.0;
     for (std::size_t k = 0; k <= n; ++k) {
         t.sigma[k] = half * static_cast<double>(k) / static_cast<double>(n);
-        const double kappa = std::abs(spline.curvature(s_le + t.sigma[k]));
+        const double kappa = window_curvature(spline, s_le + t.sigma[k]);
         max_curvature = std::max(max_curvature, kappa);
         t.target[k] = 1.0 / (1.0 + curvature_length * kappa);
     }

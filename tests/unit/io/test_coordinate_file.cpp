@@ -1,6 +1,7 @@
 // Coordinate files: what is read, what is refused, and the brief's bad files through make_section.
 #include <gtest/gtest.h>
 
+#include <algorithm>
 #include <cmath>
 #include <cstdio>
 #include <filesystem>

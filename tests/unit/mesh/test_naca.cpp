@@ -3,6 +3,7 @@
 // Jacobs, Ward & Pinkerton 1933, NACA Report 460; Jacobs & Pinkerton 1935, NACA Report 537.
 #include <gtest/gtest.h>
 
+#include <algorithm>
 #include <cmath>
 #include <numbers>
 

@@ -1,6 +1,7 @@
 // make_section: normalisation, either ordering, blunt trailing edges and every refused outline.
 #include <gtest/gtest.h>
 
+#include <algorithm>
 #include <cmath>
 #include <numbers>
 

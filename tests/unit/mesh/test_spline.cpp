@@ -2,6 +2,7 @@
 // whose exact values are known (a line, a circle), and its observed order of accuracy.
 #include <gtest/gtest.h>
 
+#include <algorithm>
 #include <cmath>
 #include <numbers>
 
