@@ -10,13 +10,14 @@ namespace veer {
 namespace {
 
 /// The spacing rule, per half (leading edge to trailing edge), in spline parameter sigma:
-///   target(sigma) = c / (1 + curvature_length * kappa(sigma))       cells shrink where the surface
-///                                                                 bends (the leading edge);
-///   target(TE)    = c / (1 + curvature_length * max |kappa|)      the trailing-edge cell matches
-///                                                                 the leading-edge one;
+///   target(sigma) = c / (1 + curvature_length * kappa(sigma)): cells shrink where the surface
+///                   bends (the leading edge); kappa is the windowed curvature below;
+///   target(TE)    = c / (1 + curvature_length * max kappa): the trailing-edge cell matches the
+///                   leading-edge one;
 ///   h = the largest function below target whose slope |dh/dsigma| <= max_slope, so neighbouring
 ///       spacings differ by about max_slope (10%);
 /// and c is chosen so that the integral of dsigma / h over the half is the half's cell count.
+/// Nodes are then placed at equal steps of that integral.
 constexpr double curvature_length = 0.04;  ///< chords; sets how strongly curvature clusters
 constexpr double max_slope = 0.1;          ///< neighbouring spacing ratio about 1.1
 constexpr int samples_per_cell = 40;       ///< fine samples of the spacing function
