@@ -32,6 +32,7 @@ inline VelocityField uniform_plus_vortex(double alpha_deg, double gamma, Vec2 ce
 /// x = (z - z_le) / c with the trailing edge z = 2b at (1, 0).
 struct Joukowski {
     double b = 1.0, mu_x = 0.1, mu_y = 0.0, alpha_deg = 5.0;
+    double circulation_factor = 1.0;  ///< 1: the Kutta circulation; other values break it
 
     Complex centre() const { return {-mu_x, mu_y}; }
     double radius() const { return std::hypot(b + mu_x, mu_y); }
@@ -94,9 +95,9 @@ struct Joukowski {
         if (std::abs(other - centre()) > std::abs(zeta - centre())) zeta = other;
         const Complex s = zeta - centre();
         const double a = radius();
-        const Complex dw = std::exp(Complex(0.0, -alpha())) -
-                           a * a * std::exp(Complex(0.0, alpha())) / (s * s) +
-                           Complex(0.0, gamma_physical() / (2.0 * std::numbers::pi)) / s;
+        const Complex dw =
+            std::exp(Complex(0.0, -alpha())) - a * a * std::exp(Complex(0.0, alpha())) / (s * s) +
+            Complex(0.0, circulation_factor * gamma_physical() / (2.0 * std::numbers::pi)) / s;
         const Complex w = dw / (1.0 - b * b / (zeta * zeta));  // u - i v
         return {w.real(), -w.imag()};
     }
