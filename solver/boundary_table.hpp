@@ -1,0 +1,48 @@
+#pragma once
+/// The one table from physical boundary to mathematical condition per variable (README, table
+/// "Boundary conditions", says the same).
+///
+/// | role                | velocity (u, v)                      | pressure p          | increment
+/// phi |
+/// |---------------------|--------------------------------------|---------------------|---------------|
+/// | wall                | Dirichlet: wall velocity (0 default) | Neumann, dp/dn = 0  | Neumann |
+/// | inflow (far field)  | Dirichlet: free stream + vortex      | Neumann             | Neumann |
+/// | outflow             | Neumann, du/dn = 0                   | Dirichlet: p_far    | Dirichlet,
+/// 0  | | prescribed velocity | Dirichlet: u(x, t) given             | Neumann             |
+/// Neumann       | | wake cut, periodic  | connectivity (ghost = partner cell)  | connectivity |
+/// connectivity  |
+///
+/// A far-field face is an inflow where the free stream enters (U_inf . n_out < 0), an outflow
+/// elsewhere; outflow segments are outflows. p_far = (1 - |u_far|^2) / 2 (Bernoulli with the
+/// far-field velocity, so p_far = 0 without the vortex correction).
+#include <optional>
+
+#include "mesh/structured_grid.hpp"
+
+namespace veer {
+
+/// What a boundary face is, once the segment kind and the flow direction are known.
+enum class FaceRole { wall, inflow, outflow, prescribed_velocity };
+
+/// Mathematical condition of one variable on a face.
+enum class Condition { dirichlet, neumann };
+
+/// Conditions of the variables of the projection method on one face role.
+struct VariableConditions {
+    Condition velocity;
+    Condition pressure;
+    Condition pressure_increment;
+};
+
+/// The table above, one row.
+VariableConditions conditions_for(FaceRole role);
+
+/// The role of a physical boundary face of a segment of `kind`; `free_stream_enters` is
+/// U_inf . n_out < 0 on that face; `overridden` where a per-segment velocity override applies.
+/// Returns nothing for connectivity kinds (wake cut, periodic).
+std::optional<FaceRole> resolve_role(SegmentKind kind, bool free_stream_enters, bool overridden);
+
+/// Short name of a role (for messages).
+const char* role_name(FaceRole role);
+
+}  // namespace veer

@@ -1,0 +1,46 @@
+#pragma once
+/// Choices of the projection stepper (the case file's numerics, in solver terms).
+#include <functional>
+#include <vector>
+
+#include "mesh/vec2.hpp"
+#include "solver/boundary_faces.hpp"
+#include "solver/pressure_solver.hpp"
+
+namespace veer {
+
+/// time_accurate: uniform steps given by the caller, BDF2; steady: pseudo-time marching with
+/// local time steps and BDF1, whose converged state does not depend on the pseudo-time steps.
+enum class TimeMode { time_accurate, steady };
+
+struct SolverSettings {
+    TimeMode mode = TimeMode::steady;
+
+    // Steady pseudo-time marching.
+    double pseudo_cfl = 2.0;       ///< local time step = pseudo_cfl / spectral radius
+    double viscous_weight = 0.25;  ///< weight of the viscous radius in the local step
+    int local_step_interval = 20;  ///< local steps (and the Poisson set-up) renewed every N
+    double rhie_chow_scale = 0.5;  ///< D_f = rhie_chow_scale * local step / pseudo_cfl
+    int momentum_sweeps = 2;       ///< line-relaxation sweeps per pseudo step
+
+    // Time-accurate stepping.
+    double momentum_tolerance = 1e-9;  ///< relative residual of the momentum solves
+    int momentum_max_sweeps = 60;
+
+    // Pressure increment.
+    PressureSolverKind pressure_solver = PressureSolverKind::multigrid;
+    double pressure_tolerance = 1e-8;  ///< relative residual of each pressure solve
+    int pressure_max_iterations = 200;
+
+    // Far field of lifting sections (grids with a C-grid layout).
+    bool far_field_vortex = true;     ///< Thomas & Salas 1986 point-vortex correction
+    Vec2 vortex_center{0.25, 0.0};    ///< quarter chord (chords)
+    double vortex_relaxation = 0.02;  ///< fraction of the lift-based update taken each step
+
+    /// Per-segment velocity prescriptions (manufactured solutions, moving lids).
+    std::vector<VelocityOverride> velocity_overrides;
+    /// Body force per unit mass f(x, t) (manufactured solutions); empty where none.
+    std::function<Vec2(Vec2 x, double t)> body_force;
+};
+
+}  // namespace veer
