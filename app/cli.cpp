@@ -3,18 +3,71 @@
 #include <CLI/CLI.hpp>
 #include <iostream>
 
+#include "app/commands.hpp"
 #include "mesh/errors.hpp"
 
 namespace veer {
+namespace {
+
+void add_case_options(CLI::App& sub, CaseOptions& o) {
+    sub.add_option("case", o.case_file, "case file (TOML)")->required()->check(CLI::ExistingFile);
+    sub.add_option("--set", o.overrides,
+                   "override a case value, e.g. --set flow.alpha=6 (repeatable)")
+        ->type_name("TABLE.KEY=VALUE");
+}
+
+}  // namespace
 
 int run_cli(int argc, char** argv) {
-    CLI::App app{"veer: 2D incompressible flow about airfoil sections"};
+    CLI::App app{"veer: 2D incompressible flow about airfoil sections, lift computed two ways"};
     app.set_version_flag("--version", std::string("veer ") + VEER_VERSION);
     app.require_subcommand(1);
+    app.footer("Run `veer SUBCOMMAND --help` for the options of each subcommand.");
+
+    CaseOptions check_opts;
+    CLI::App* check = app.add_subcommand("check", "validate a case file without running it");
+    add_case_options(*check, check_opts);
+
+    MeshOptions mesh_opts;
+    CLI::App* mesh =
+        app.add_subcommand("mesh", "build the C-grid of a case and report its quality");
+    add_case_options(*mesh, mesh_opts.input);
+    mesh->add_option("-o,--output", mesh_opts.out_dir, "output folder")->required();
+    mesh->add_flag("--force", mesh_opts.force, "write into a folder that holds another study");
+
+    RunOptions run_opts;
+    CLI::App* run = app.add_subcommand("run", "solve the flow of a case");
+    run->add_option("case", run_opts.input.case_file, "case file (TOML)")->check(CLI::ExistingFile);
+    run->add_option("--set", run_opts.input.overrides, "override a case value (repeatable)")
+        ->type_name("TABLE.KEY=VALUE");
+    run->add_option("-o,--output", run_opts.out_dir,
+                    "output folder (default with --restart: the checkpoint's folder)");
+    run->add_option("--restart", run_opts.restart, "continue from a checkpoint file")
+        ->check(CLI::ExistingFile);
+    run->add_flag("--force", run_opts.force, "write into a folder that holds another study");
+    run->add_flag("-q,--quiet", run_opts.quiet, "no live progress line");
+
     try {
         app.parse(argc, argv);
     } catch (const CLI::ParseError& e) {
         return app.exit(e);
+    }
+    try {
+        if (*check) return run_check_command(check_opts);
+        if (*mesh) return run_mesh_command(mesh_opts);
+        if (*run) {
+            if (run_opts.input.case_file.empty() && run_opts.restart.empty())
+                throw InputError("veer run: give a case file, or --restart CHECKPOINT");
+            if (run_opts.out_dir.empty() && run_opts.restart.empty())
+                throw InputError("veer run: give an output folder with -o DIR");
+            return run_run_command(run_opts);
+        }
+    } catch (const InputError& e) {
+        std::cerr << "veer: error: " << e.what() << "\n";
+        return 2;
+    } catch (const std::exception& e) {
+        std::cerr << "veer: internal error: " << e.what() << "\n";
+        return 3;
     }
     return 0;
 }

@@ -133,7 +133,7 @@ const toml::table* sub_table(const toml::table& root, const std::string& name,
 }
 
 void read_geometry(const toml::table* t, const std::string& source, const fs_path& base,
-                   CaseSpec& c) {
+                   FileCheck files, CaseSpec& c) {
     TableReader r(t, "geometry", source);
     const auto naca = r.text("naca", {}, "four or five digits, e.g. \"0012\" or \"23012\"");
     const auto file = r.text("coordinates", {}, "the path of a two-column x y file");
@@ -155,7 +155,7 @@ void read_geometry(const toml::table* t, const std::string& source, const fs_pat
     } else {
         fs_path p(*file);
         if (p.is_relative()) p = base / p;
-        if (!std::filesystem::exists(p))
+        if (files == FileCheck::require && !std::filesystem::exists(p))
             r.fail(*t->get("coordinates"), "coordinates", "\"" + *file + "\"",
                    "an existing file (looked for " + p.string() + ")");
         c.geometry.coordinates = p;
@@ -276,7 +276,7 @@ void apply_overrides(toml::table& root, const std::vector<std::string>& override
 
 CaseSpec parse_case_text(const std::string& text, const std::string& source,
                          const std::filesystem::path& base_dir,
-                         const std::vector<std::string>& overrides) {
+                         const std::vector<std::string>& overrides, FileCheck files) {
     toml::table root;
     try {
         root = toml::parse(text, source);
@@ -304,7 +304,7 @@ CaseSpec parse_case_text(const std::string& text, const std::string& source,
     }
     const toml::table* geometry = sub_table(root, "geometry", source);
     if (!geometry) throw InputError(source + ": a [geometry] table is required");
-    read_geometry(geometry, source, base_dir, c);
+    read_geometry(geometry, source, base_dir, files, c);
     read_mesh(sub_table(root, "mesh", source), source, c);
     const toml::table* flow = sub_table(root, "flow", source);
     if (!flow) throw InputError(source + ": a [flow] table is required (reynolds, alpha, model)");

@@ -14,9 +14,14 @@ namespace veer {
 CaseSpec read_case_file(const std::filesystem::path& path,
                         const std::vector<std::string>& overrides = {});
 
+/// Whether the files a case names (coordinates) must exist: a restart takes its grid from the
+/// checkpoint and no longer needs them.
+enum class FileCheck { require, skip };
+
 /// Same, from text; `source` names it in messages and `base_dir` resolves relative paths.
 CaseSpec parse_case_text(const std::string& text, const std::string& source,
                          const std::filesystem::path& base_dir,
-                         const std::vector<std::string>& overrides = {});
+                         const std::vector<std::string>& overrides = {},
+                         FileCheck files = FileCheck::require);
 
 }  // namespace veer

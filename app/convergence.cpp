@@ -1,0 +1,62 @@
+#include "app/convergence.hpp"
+
+#include <algorithm>
+#include <cmath>
+#include <limits>
+
+#include "mesh/errors.hpp"
+
+namespace veer {
+
+bool ConvergenceMonitor::add(const ConvergenceSample& s) {
+    const double r[3] = {s.residual_u, s.residual_v, s.residual_continuity};
+    ++m_count;
+    if (m_count <= m_criteria.reference_steps)
+        for (int k = 0; k < 3; ++k) m_reference[k] = std::max(m_reference[k], r[k]);
+    m_relative = 0.0;
+    for (int k = 0; k < 3; ++k)
+        if (m_reference[k] > 0.0) m_relative = std::max(m_relative, r[k] / m_reference[k]);
+    m_cl.push_back(s.cl);
+    m_cd.push_back(s.cd);
+    while (static_cast<int>(m_cl.size()) > m_criteria.force_window + 1) {
+        m_cl.pop_front();
+        m_cd.pop_front();
+    }
+    if (m_count <= m_criteria.reference_steps) return false;
+    return m_relative <= m_criteria.residual_drop && force_change() <= m_criteria.force_tolerance;
+}
+
+double ConvergenceMonitor::force_change() const {
+    if (static_cast<int>(m_cl.size()) <= m_criteria.force_window)
+        return std::numeric_limits<double>::infinity();
+    auto spread = [](const std::deque<double>& d) {
+        const auto [lo, hi] = std::minmax_element(d.begin(), d.end());
+        return *hi - *lo;
+    };
+    return std::max(spread(m_cl), spread(m_cd));
+}
+
+std::vector<double> ConvergenceMonitor::save() const {
+    std::vector<double> out = {static_cast<double>(m_count), m_reference[0], m_reference[1],
+                               m_reference[2], m_relative};
+    for (std::size_t k = 0; k < m_cl.size(); ++k) {
+        out.push_back(m_cl[k]);
+        out.push_back(m_cd[k]);
+    }
+    return out;
+}
+
+void ConvergenceMonitor::load(const std::vector<double>& saved) {
+    VEER_VERIFY(saved.size() >= 5 && (saved.size() - 5) % 2 == 0, "bad convergence record");
+    m_count = static_cast<long>(saved[0]);
+    for (int k = 0; k < 3; ++k) m_reference[k] = saved[static_cast<std::size_t>(k) + 1];
+    m_relative = saved[4];
+    m_cl.clear();
+    m_cd.clear();
+    for (std::size_t k = 5; k < saved.size(); k += 2) {
+        m_cl.push_back(saved[k]);
+        m_cd.push_back(saved[k + 1]);
+    }
+}
+
+}  // namespace veer

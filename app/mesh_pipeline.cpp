@@ -1,0 +1,32 @@
+#include "app/mesh_pipeline.hpp"
+
+#include "io/coordinate_file.hpp"
+#include "mesh/cgrid.hpp"
+#include "mesh/naca.hpp"
+#include "mesh/section_builder.hpp"
+#include "mesh/surface_sampling.hpp"
+#include "mesh/wall_spacing.hpp"
+
+namespace veer {
+
+Section build_section(const CaseSpec& c) {
+    if (!c.geometry.naca.empty()) {
+        const TrailingEdge te =
+            c.geometry.closed_trailing_edge ? TrailingEdge::closed : TrailingEdge::open;
+        return make_section(naca_outline(c.geometry.naca, te), c.geometry.name);
+    }
+    return make_section(read_coordinate_file(c.geometry.coordinates), c.geometry.name);
+}
+
+MeshBuild build_mesh(const CaseSpec& c) {
+    MeshBuild b;
+    b.section = build_section(c);
+    b.spec = c.mesh;
+    if (c.y_plus) b.spec.first_cell = first_cell_for_y_plus(*c.y_plus, c.flow.reynolds);
+    b.surface = sample_surface(b.section, b.spec.around);
+    b.grid = generate_cgrid(b.surface, b.spec);
+    b.quality = assess_quality(b.grid, b.spec.max_growth);
+    return b;
+}
+
+}  // namespace veer

@@ -1,0 +1,178 @@
+#include "app/simulation.hpp"
+
+#include <fmt/format.h>
+
+#include <algorithm>
+#include <chrono>
+#include <cmath>
+
+#include "app/history_log.hpp"
+#include "app/interrupt.hpp"
+#include "app/progress_line.hpp"
+#include "io/field_series.hpp"
+#include "mesh/errors.hpp"
+
+namespace veer {
+namespace {
+
+constexpr const char* convergence_record = "simulation_convergence";
+constexpr double default_unsteady_cfl = 0.8;  // common practice for BDF2 with explicit convection
+
+ConvergenceCriteria criteria_for(const RunSpec& run) {
+    ConvergenceCriteria c;
+    c.residual_drop = run.residual_drop;
+    c.force_tolerance = run.force_tolerance;
+    return c;
+}
+
+bool is_steady(const CaseSpec& spec) { return spec.run.mode == "steady"; }
+
+}  // namespace
+
+SolverSettings solver_settings_for(const CaseSpec& spec) {
+    SolverSettings s;
+    s.mode = is_steady(spec) ? TimeMode::steady : TimeMode::time_accurate;
+    s.pressure_solver = parse_pressure_solver_kind(spec.run.pressure_solver,
+                                                   spec.path.string() + ": [run] pressure_solver");
+    if (is_steady(spec) && spec.run.cfl > 0) s.pseudo_cfl = spec.run.cfl;
+    return s;
+}
+
+Simulation::Simulation(const CaseSpec& spec, StructuredGrid grid, std::filesystem::path out_dir,
+                       SimulationOptions options)
+    : m_spec(spec),
+      m_grid(std::move(grid)),
+      m_metrics(compute_metrics(m_grid)),
+      m_out(std::move(out_dir)),
+      m_options(std::move(options)),
+      m_solver(std::make_unique<FlowSolver>(m_grid, spec.flow, solver_settings_for(spec))),
+      m_monitor(criteria_for(spec.run)) {}
+
+Simulation::~Simulation() = default;
+
+void Simulation::resume(const CheckpointData& checkpoint) {
+    std::vector<NamedArray> solver_state;
+    for (const NamedArray& a : checkpoint.arrays) {
+        if (a.name == convergence_record)
+            m_monitor.load(a.values);
+        else
+            solver_state.push_back(a);
+    }
+    m_solver->restore(solver_state);
+    m_resumed = true;
+    m_last_checkpoint_step = m_solver->step_count();
+}
+
+double Simulation::next_time_step() const {
+    const double cfl = m_spec.run.cfl > 0 ? m_spec.run.cfl : default_unsteady_cfl;
+    const double dt = m_solver->time_step_for_cfl(cfl);
+    const double left = m_spec.run.end_time - m_solver->time();
+    // Land on end_time exactly, without a sliver of a last step.
+    return left < 1.5 * dt ? (left > dt ? 0.5 * left : left) : dt;
+}
+
+void Simulation::write_checkpoint_now() {
+    CheckpointData c;
+    c.grid = m_grid;
+    c.case_text = m_spec.text;
+    c.step = m_solver->step_count();
+    c.time = m_solver->time();
+    c.arrays = m_solver->state();
+    c.arrays.push_back({convergence_record, m_monitor.save()});
+    write_checkpoint(checkpoint_path(), c);
+    m_last_checkpoint_step = m_solver->step_count();
+}
+
+std::string Simulation::divergence_diagnosis(const StepReport& r) const {
+    const Vec2 where = m_metrics.centroid[m_metrics.cell(r.worst_i, r.worst_j)];
+    const std::string kept = m_last_checkpoint_step >= 0
+                                 ? fmt::format("the last good state is {} (step {})",
+                                               checkpoint_path().string(), m_last_checkpoint_step)
+                                 : std::string("no checkpoint was written before it");
+    return fmt::format(
+        "run diverged at step {}: {} is {} in cell ({}, {}) at x = {:.4f}, y = {:.4f} chords; {}. "
+        "Try a smaller [run] cfl, a finer or smoother grid near that point, or mode = "
+        "\"unsteady\" if the flow does not settle",
+        r.step, r.worst_variable, r.finite ? "growing without bound" : "not finite", r.worst_i,
+        r.worst_j, where.x, where.y, kept);
+}
+
+RunResult Simulation::run() {
+    const auto start = std::chrono::steady_clock::now();
+    const bool steady = is_steady(m_spec);
+    const bool has_wall = m_grid.c_layout().has_value();
+    HistoryLog history(m_out / "history.csv", m_resumed, m_solver->step_count());
+    FieldSeries series(m_out, m_resumed ? SeriesStart::resume : SeriesStart::fresh);
+    auto frame_time = [&] {
+        return steady ? static_cast<double>(m_solver->step_count()) : m_solver->time();
+    };
+    if (m_resumed)
+        series.discard_after(frame_time());
+    else
+        series.write_frame(frame_time(), m_grid, m_metrics, m_solver->fields());
+    if (!m_resumed) write_checkpoint_now();  // a diverging run always has a good state to keep
+    ProgressLine progress(m_options.progress, m_options.label);
+    install_interrupt_handlers();
+
+    RunResult res;
+    res.status = RunStatus::step_cap;
+    for (;;) {
+        if (interrupt_requested()) {
+            res.status = RunStatus::interrupted;
+            break;
+        }
+        if (m_solver->step_count() >= m_spec.run.steps) break;
+        if (!steady && m_solver->time() >= m_spec.run.end_time * (1 - 1e-12)) {
+            res.status = RunStatus::end_time;
+            break;
+        }
+        const StepReport r =
+            steady ? m_solver->advance_pseudo_time() : m_solver->advance(next_time_step());
+        res.last = r;
+        if (!r.finite) {
+            res.status = RunStatus::diverged;
+            res.diagnosis = divergence_diagnosis(r);
+            break;
+        }
+        if (has_wall)
+            res.forces =
+                integrate_surface_forces(m_grid, m_metrics, m_solver->fields(), m_spec.flow);
+        history.append({r.step, r.time, r.residual_u, r.residual_v, r.residual_continuity,
+                        res.forces.cl.total, res.forces.cd.total, res.forces.cm.total});
+        const bool converged = m_monitor.add({r.residual_u, r.residual_v, r.residual_continuity,
+                                              res.forces.cl.total, res.forces.cd.total});
+        if (m_monitor.blowing_up()) {
+            res.status = RunStatus::diverged;
+            res.diagnosis = divergence_diagnosis(r);
+            break;
+        }
+        const double by_steps = static_cast<double>(r.step) / static_cast<double>(m_spec.run.steps);
+        const double by_goal = steady ? std::log(std::max(m_monitor.relative_residual(), 1e-300)) /
+                                            std::log(m_spec.run.residual_drop)
+                                      : r.time / m_spec.run.end_time;
+        progress.update({r.step, r.time, r.residual_u, r.residual_v, r.residual_continuity,
+                         res.forces.cl.total, res.forces.cd.total,
+                         std::clamp(std::max(by_steps, by_goal), 0.0, 1.0), steady});
+        if (m_spec.run.output_every > 0 && r.step % m_spec.run.output_every == 0)
+            series.write_frame(frame_time(), m_grid, m_metrics, m_solver->fields());
+        if (r.step % m_spec.run.checkpoint_every == 0) write_checkpoint_now();
+        if (steady && converged) {
+            res.status = RunStatus::converged;
+            break;
+        }
+    }
+    progress.finish();
+    if (res.status != RunStatus::diverged) {
+        if (series.frames().empty() || series.frames().back().time < frame_time())
+            series.write_frame(frame_time(), m_grid, m_metrics, m_solver->fields());
+        if (m_last_checkpoint_step != m_solver->step_count()) write_checkpoint_now();
+    }
+    res.steps = m_solver->step_count();
+    res.time = m_solver->time();
+    res.last_checkpoint_step = m_last_checkpoint_step;
+    res.wall_seconds =
+        std::chrono::duration<double>(std::chrono::steady_clock::now() - start).count();
+    return res;
+}
+
+}  // namespace veer

@@ -1,0 +1,76 @@
+#pragma once
+/// The Simulation schedules a run: it owns the clock (time steps from the CFL target), the stop
+/// criteria (convergence, step cap, end time), divergence checks, the history, field frames and
+/// checkpoints. The solver only steps.
+#include <filesystem>
+#include <memory>
+#include <string>
+
+#include "app/convergence.hpp"
+#include "io/case_spec.hpp"
+#include "io/checkpoint.hpp"
+#include "mesh/grid_metrics.hpp"
+#include "mesh/structured_grid.hpp"
+#include "postprocess/surface_forces.hpp"
+#include "solver/flow_solver.hpp"
+
+namespace veer {
+
+enum class RunStatus { converged, step_cap, end_time, interrupted, diverged };
+
+/// How a run ended.
+struct RunResult {
+    RunStatus status = RunStatus::step_cap;
+    long steps = 0;             ///< steps (iterations) taken in total, restarts included
+    double time = 0.0;          ///< physical time reached (unsteady)
+    double wall_seconds = 0.0;  ///< this invocation's wall time
+    std::string diagnosis;      ///< diverged: where and what to try
+    StepReport last;            ///< the last step's figures
+    SurfaceForces forces;       ///< the last step's surface forces
+    long last_checkpoint_step = -1;
+};
+
+struct SimulationOptions {
+    bool progress = true;  ///< live progress line on stderr
+    std::string label;     ///< prefix of the progress line (e.g. a sweep point)
+};
+
+class Simulation {
+public:
+    /// A new run of `spec` on `grid`, writing into `out_dir` (which the caller has prepared).
+    Simulation(const CaseSpec& spec, StructuredGrid grid, std::filesystem::path out_dir,
+               SimulationOptions options = {});
+    ~Simulation();
+
+    /// Continues from a checkpoint of the same case and grid (solver and schedule state).
+    void resume(const CheckpointData& checkpoint);
+
+    /// Steps until a stop criterion holds; writes the history, frames and checkpoints.
+    RunResult run();
+
+    const StructuredGrid& grid() const { return m_grid; }
+    const GridMetrics& metrics() const { return m_metrics; }
+    const FlowSolver& solver() const { return *m_solver; }
+    const CaseSpec& spec() const { return m_spec; }
+    std::filesystem::path checkpoint_path() const { return m_out / "checkpoint.h5"; }
+
+private:
+    void write_checkpoint_now();
+    std::string divergence_diagnosis(const StepReport& r) const;
+    double next_time_step() const;
+
+    CaseSpec m_spec;
+    StructuredGrid m_grid;
+    GridMetrics m_metrics;
+    std::filesystem::path m_out;
+    SimulationOptions m_options;
+    std::unique_ptr<FlowSolver> m_solver;
+    ConvergenceMonitor m_monitor;
+    bool m_resumed = false;
+    long m_last_checkpoint_step = -1;
+};
+
+/// Solver settings for a case (mode, pressure solver, CFL).
+SolverSettings solver_settings_for(const CaseSpec& spec);
+
+}  // namespace veer
