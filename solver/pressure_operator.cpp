@@ -5,6 +5,7 @@
 #include <string>
 
 #include "mesh/errors.hpp"
+#include "solver/pressure_loops.hpp"
 
 namespace veer {
 namespace {
@@ -106,23 +107,20 @@ void apply_operator(const PressureOperator& op, const std::vector<double>& x,
     const PressureRow* rows = op.rows.data();
     const double* xp = x.data();
     double* yp = y.data();
-#pragma omp parallel for schedule(static) if (n > 4096)
-    for (int c = 0; c < n; ++c) {
+    parallel_for(n, parallel_cell_threshold, [=](int c) {
         const PressureRow& r = rows[c];
         yp[c] = r.diagonal * xp[c] - r.coupling[0] * xp[r.neighbour[0]] -
                 r.coupling[1] * xp[r.neighbour[1]] - r.coupling[2] * xp[r.neighbour[2]] -
                 r.coupling[3] * xp[r.neighbour[3]];
-    }
+    });
 }
 
 void operator_residual(const PressureOperator& op, const std::vector<double>& b,
                        const std::vector<double>& x, std::vector<double>& r) {
     apply_operator(op, x, r);
-    const int n = op.size();
-#pragma omp parallel for schedule(static) if (n > 4096)
-    for (int c = 0; c < n; ++c)
-        r[static_cast<std::size_t>(c)] =
-            b[static_cast<std::size_t>(c)] - r[static_cast<std::size_t>(c)];
+    const double* bp = b.data();
+    double* rp = r.data();
+    parallel_for(op.size(), parallel_cell_threshold, [=](int c) { rp[c] = bp[c] - rp[c]; });
 }
 
 namespace {
@@ -132,15 +130,13 @@ double block_ordered_sum(std::size_t n, Term term) {
     constexpr std::size_t block = 2048;
     const std::size_t blocks = (n + block - 1) / block;
     std::vector<double> partial(blocks, 0.0);
-    const auto nb = static_cast<long>(blocks);
-#pragma omp parallel for schedule(static) if (nb > 2)
-    for (long b = 0; b < nb; ++b) {
+    parallel_for(static_cast<int>(blocks), 3, [&](int b) {
         const std::size_t k0 = static_cast<std::size_t>(b) * block;
         const std::size_t k1 = std::min(n, k0 + block);
         double s = 0.0;
         for (std::size_t k = k0; k < k1; ++k) s += term(k);
         partial[static_cast<std::size_t>(b)] = s;
-    }
+    });
     double total = 0.0;
     for (double s : partial) total += s;
     return total;

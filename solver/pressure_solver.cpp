@@ -3,6 +3,7 @@
 #include <string>
 
 #include "mesh/errors.hpp"
+#include "solver/multigrid_solver.hpp"
 #include "solver/pressure_solver_eigen.hpp"
 
 namespace veer {
@@ -10,7 +11,7 @@ namespace veer {
 std::unique_ptr<PressureSolver> make_pressure_solver(PressureSolverKind kind) {
     switch (kind) {
         case PressureSolverKind::multigrid:
-            throw InternalError("the multigrid pressure solver is not built yet");
+            return std::make_unique<MultigridSolver>();
         case PressureSolverKind::eigen_cg:
             return make_eigen_cg_solver();
         case PressureSolverKind::eigen_bicgstab:

@@ -1,0 +1,173 @@
+#include "solver/multigrid_lines.hpp"
+
+#include <algorithm>
+#include <climits>
+#include <cstddef>
+
+#include "mesh/errors.hpp"
+#include "solver/pressure_loops.hpp"
+
+namespace veer {
+namespace {
+
+constexpr int slot_im = 0, slot_ip = 1, slot_jm = 2, slot_jp = 3, no_slot = -1;
+
+struct LineBuild {
+    std::vector<int> cells, prev, next;
+    void clear() { cells.clear(), prev.clear(), next.clear(); }
+    void push(int cell, int prev_slot, int next_slot) {
+        cells.push_back(cell), prev.push_back(prev_slot), next.push_back(next_slot);
+    }
+};
+
+}  // namespace
+
+LineRelaxation::LineRelaxation(const PoissonStencil& s, const PressureOperator& op,
+                               Direction direction) {
+    VEER_VERIFY(op.ni == s.ni && op.nj == s.nj, "operator and stencil of different levels");
+    const int ni = s.ni, nj = s.nj;
+    LineBuild line;
+    auto column = [&](int i) {  // (i, 0) .. (i, nj-1)
+        for (int j = 0; j < nj; ++j)
+            line.push(i + ni * j, j > 0 ? slot_jm : no_slot, j < nj - 1 ? slot_jp : no_slot);
+    };
+    if (direction == Direction::j_lines) {
+        const int wake = s.wake_cut ? s.wake_cut->wake : 0;
+        for (int i = 0; i < ni - wake; ++i) {
+            line.clear();
+            if (i < wake) {  // down column i, across the cut, up the mirror column
+                for (int j = nj - 1; j >= 0; --j)
+                    line.push(i + ni * j, j < nj - 1 ? slot_jp : no_slot, slot_jm);
+                const int mirror = ni - 1 - i;
+                for (int j = 0; j < nj; ++j)
+                    line.push(mirror + ni * j, slot_jm, j < nj - 1 ? slot_jp : no_slot);
+            } else {
+                column(i);
+            }
+            add_line(op, line.cells, line.prev);
+            (void)line.next;
+        }
+    } else {
+        for (int j = 0; j < nj; ++j) {
+            line.clear();
+            for (int i = 0; i < ni; ++i)
+                line.push(i + ni * j, i > 0 ? slot_im : no_slot, i < ni - 1 ? slot_ip : no_slot);
+            add_line(op, line.cells, line.prev);
+        }
+    }
+    colour_lines(op);
+    m_work.assign(m_cell.size(), 0.0);
+}
+
+// Each cell's previous-cell slot is given; its next-cell slot is the previous slot of the next
+// cell seen from the other side, found as the slot of this cell pointing at the next cell.
+void LineRelaxation::add_line(const PressureOperator& op, const std::vector<int>& cells,
+                              const std::vector<int>& prev_slot) {
+    const int n = static_cast<int>(cells.size());
+    double w_prev = 0.0;
+    for (int k = 0; k < n; ++k) {
+        const PressureRow& row =
+            op.rows[static_cast<std::size_t>(cells[static_cast<std::size_t>(k)])];
+        const int ps = prev_slot[static_cast<std::size_t>(k)];
+        int ns = no_slot;
+        if (k + 1 < n) {
+            const int next_cell = cells[static_cast<std::size_t>(k + 1)];
+            const int next_prev = prev_slot[static_cast<std::size_t>(k + 1)];
+            const auto& next_row = op.rows[static_cast<std::size_t>(next_cell)];
+            // The slot of this cell whose face is the next cell's previous face: opposite slot
+            // (-i <-> +i, -j <-> +j), except across the wake cut where both use -j.
+            const bool across_cut =
+                next_prev == slot_jm && row.neighbour[slot_jm] == next_cell &&
+                next_row.neighbour[slot_jm] == cells[static_cast<std::size_t>(k)];
+            ns = across_cut ? slot_jm : (next_prev ^ 1);
+            VEER_VERIFY(row.neighbour[static_cast<std::size_t>(ns)] == next_cell,
+                        "line cells are not neighbours");
+        }
+        unsigned char off = 0x0f;
+        const double a = ps == no_slot ? 0.0 : row.coupling[static_cast<std::size_t>(ps)];
+        const double u = ns == no_slot ? 0.0 : row.coupling[static_cast<std::size_t>(ns)];
+        if (ps != no_slot) off = static_cast<unsigned char>(off & ~(1u << ps));
+        if (ns != no_slot) off = static_cast<unsigned char>(off & ~(1u << ns));
+        const double pivot = row.diagonal - a * w_prev;
+        VEER_VERIFY(pivot > 0.0, "line relaxation met a singular line (no coupling off it)");
+        m_cell.push_back(cells[static_cast<std::size_t>(k)]);
+        m_off_line.push_back(off);
+        m_lower.push_back(a);
+        m_inv_pivot.push_back(1.0 / pivot);
+        w_prev = u / pivot;
+        m_upper_over.push_back(w_prev);
+    }
+    m_line_begin.push_back(static_cast<int>(m_cell.size()));
+}
+
+void LineRelaxation::colour_lines(const PressureOperator& op) {
+    const int lines = line_count();
+    std::vector<int> line_of(op.rows.size(), -1), colour(static_cast<std::size_t>(lines), -1);
+    for (int l = 0; l < lines; ++l)
+        for (int p = m_line_begin[static_cast<std::size_t>(l)]; p < m_line_begin[l + 1u]; ++p)
+            line_of[static_cast<std::size_t>(m_cell[static_cast<std::size_t>(p)])] = l;
+    int colours = 0;
+    for (int l = 0; l < lines; ++l) {  // greedy, in line order: deterministic
+        std::vector<bool> taken(static_cast<std::size_t>(colours) + 1, false);
+        for (int p = m_line_begin[static_cast<std::size_t>(l)]; p < m_line_begin[l + 1u]; ++p) {
+            const PressureRow& row =
+                op.rows[static_cast<std::size_t>(m_cell[static_cast<std::size_t>(p)])];
+            for (std::size_t s = 0; s < 4; ++s) {
+                const int other = line_of[static_cast<std::size_t>(row.neighbour[s])];
+                if (row.coupling[s] != 0.0 && other != l && other >= 0 &&
+                    colour[static_cast<std::size_t>(other)] >= 0)
+                    taken[static_cast<std::size_t>(colour[static_cast<std::size_t>(other)])] = true;
+            }
+        }
+        const auto free = std::find(taken.begin(), taken.end(), false) - taken.begin();
+        colour[static_cast<std::size_t>(l)] = static_cast<int>(free);
+        colours = std::max(colours, static_cast<int>(free) + 1);
+    }
+    m_colour_begin.assign(1, 0);
+    for (int c = 0; c < colours; ++c) {
+        for (int l = 0; l < lines; ++l)
+            if (colour[static_cast<std::size_t>(l)] == c) m_order.push_back(l);
+        m_colour_begin.push_back(static_cast<int>(m_order.size()));
+    }
+}
+
+void LineRelaxation::relax_line(const PressureOperator& op, const double* b, double* x,
+                                int line) const {
+    const int p0 = m_line_begin[static_cast<std::size_t>(line)];
+    const int p1 = m_line_begin[static_cast<std::size_t>(line) + 1];
+    double* y = m_work.data();
+    double y_prev = 0.0;
+    for (int p = p0; p < p1; ++p) {  // off-line couplings to the right-hand side, eliminate
+        const auto q = static_cast<std::size_t>(p);
+        const int c = m_cell[q];
+        const PressureRow& row = op.rows[static_cast<std::size_t>(c)];
+        double r = b[c];
+        const unsigned off = m_off_line[q];
+        for (std::size_t s = 0; s < 4; ++s)
+            if (off & (1u << s)) r += row.coupling[s] * x[row.neighbour[s]];
+        y_prev = (r + m_lower[q] * y_prev) * m_inv_pivot[q];
+        y[q] = y_prev;
+    }
+    double x_next = 0.0;
+    for (int p = p1 - 1; p >= p0; --p) {  // back substitution
+        const auto q = static_cast<std::size_t>(p);
+        x_next = y[q] + m_upper_over[q] * x_next;
+        x[m_cell[q]] = x_next;
+    }
+}
+
+void LineRelaxation::sweep(const PressureOperator& op, const std::vector<double>& b,
+                           std::vector<double>& x, bool forward) const {
+    const int colours = colour_count();
+    const int min_parallel = op.size() >= parallel_cell_threshold ? 2 : INT_MAX;
+    for (int k = 0; k < colours; ++k) {
+        const int c = forward ? k : colours - 1 - k;
+        const int first = m_colour_begin[static_cast<std::size_t>(c)];
+        const int count = m_colour_begin[static_cast<std::size_t>(c) + 1] - first;
+        const int* order = m_order.data() + first;
+        parallel_for(count, min_parallel,
+                     [&](int l) { relax_line(op, b.data(), x.data(), order[l]); });
+    }
+}
+
+}  // namespace veer
