@@ -119,13 +119,20 @@ StructuredGrid read_mesh(hid_t veer_group) {
     return grid;
 }
 
+bool usable_name(const std::string& name) {
+    return !name.empty() && name != "." && name.find('/') == std::string::npos;
+}
+
 void check_names(const CheckpointData& data) {
     std::set<std::string> seen;
     for (const NamedArray& a : data.arrays) {
-        VEER_VERIFY(!a.name.empty() && a.name != "." && a.name.find('/') == std::string::npos,
+        VEER_VERIFY(usable_name(a.name),
                     "checkpoint array name '" + a.name + "' is empty or holds '/'");
         VEER_VERIFY(seen.insert(a.name).second, "checkpoint array '" + a.name + "' given twice");
     }
+    for (const auto& entry : data.scalars)
+        VEER_VERIFY(usable_name(entry.first),
+                    "checkpoint scalar name '" + entry.first + "' is empty or holds '/'");
 }
 
 void write_file(const fs::path& tmp, const CheckpointData& data) {

@@ -176,6 +176,9 @@ TEST(Checkpoint, BadArrayNameIsRefusedBeforeAnythingIsWritten) {
     EXPECT_THROW(write_checkpoint(dir / "c.h5", d), InternalError);
     d.arrays = {{"u", {1.0}}, {"u", {2.0}}};
     EXPECT_THROW(write_checkpoint(dir / "c.h5", d), InternalError);
+    d.arrays.clear();
+    d.scalars[""] = 1.0;
+    EXPECT_THROW(write_checkpoint(dir / "c.h5", d), InternalError);
     EXPECT_FALSE(std::filesystem::exists(dir / "c.h5"));
     EXPECT_FALSE(std::filesystem::exists(dir / "c.h5.tmp"));
 }
