@@ -63,6 +63,8 @@ void Simulation::resume(const CheckpointData& checkpoint) {
     m_last_checkpoint_step = m_solver->step_count();
 }
 
+void Simulation::start_from(const FlowFields& initial) { m_solver->initialize(initial); }
+
 double Simulation::next_time_step() const {
     const double cfl = m_spec.run.cfl > 0 ? m_spec.run.cfl : default_unsteady_cfl;
     const double dt = m_solver->time_step_for_cfl(cfl);

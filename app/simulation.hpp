@@ -45,6 +45,10 @@ public:
     /// Continues from a checkpoint of the same case and grid (solver and schedule state).
     void resume(const CheckpointData& checkpoint);
 
+    /// Starts a new run from given fields on the same grid (e.g. the previous point of a sweep)
+    /// instead of the free stream.
+    void start_from(const FlowFields& initial);
+
     /// Steps until a stop criterion holds; writes the history, frames and checkpoints.
     RunResult run();
 
