@@ -149,12 +149,8 @@ MarchOutcome march_layers(StructuredGrid& grid, const MarchPlan& plan) {
         for (std::size_t i = 0; i < count; ++i) next[i] = cur[i] + step * dirs[i];
         for (int i = 0; i < ni; ++i) {
             const auto k = static_cast<std::size_t>(i);
-#ifndef VEER_DEBUG_NOSTOP
             if (quad_area(cur[k], cur[k + 1], next[k + 1], next[k]) <= 0.0)
                 return {true, i, j, cur[k]};
-#else
-            (void)k;
-#endif
         }
         for (int i = 0; i <= ni; ++i) grid.node(i, j + 1) = next[static_cast<std::size_t>(i)];
         std::swap(cur, next);
