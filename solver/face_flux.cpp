@@ -58,6 +58,29 @@ void correct_face_flux(const FaceGeometry& g, CellView phi, const std::vector<do
     });
 }
 
+void flux_consistent_correction(const FaceGeometry& g, CellView phi,
+                                const std::vector<double>& gamma_i,
+                                const std::vector<double>& gamma_j, CellView du, CellView dv) {
+    const FaceFamily& fi = g.i_faces;
+    const FaceFamily& fj = g.j_faces;
+    for_each_cell({0, g.ni, 0, g.nj}, [&](int i, int j) {
+        const Vec2 xp = g.centroid[g.cell(i, j)];
+        const std::size_t w = g.face_i(i, j), e = g.face_i(i + 1, j);
+        const std::size_t s = g.face_j(i, j), n = g.face_j(i, j + 1);
+        const double pp = phi(i, j);
+        // Outward flux changes through the four faces.
+        const double dw = gamma_i[w] * fi.ortho[w] * (pp - phi(i - 1, j));
+        const double de = -gamma_i[e] * fi.ortho[e] * (phi(i + 1, j) - pp);
+        const double ds = gamma_j[s] * fj.ortho[s] * (pp - phi(i, j - 1));
+        const double dn = -gamma_j[n] * fj.ortho[n] * (phi(i, j + 1) - pp);
+        const Vec2 sum = dw * (fi.center[w] - xp) + de * (fi.center[e] - xp) +
+                         ds * (fj.center[s] - xp) + dn * (fj.center[n] - xp);
+        const double inv_v = 1.0 / g.volume[g.cell(i, j)];
+        du(i, j) = inv_v * sum.x;
+        dv(i, j) = inv_v * sum.y;
+    });
+}
+
 void interpolated_face_flux(const FaceGeometry& g, CellView u, CellView v,
                             std::vector<double>& flux_i, std::vector<double>& flux_j) {
     const std::vector<double> none_i(flux_i.size(), 0.0), none_j(flux_j.size(), 0.0);

@@ -38,6 +38,14 @@ void correct_face_flux(const FaceGeometry& g, CellView phi, const std::vector<do
                        const std::vector<double>& gamma_j, std::vector<double>& flux_i,
                        std::vector<double>& flux_j);
 
+/// Cell velocity change reconstructed from face-flux changes dF (Perot 2000, J. Comput. Phys.
+/// 159, 58-89, (memory)): du_P = (1/V) sum_f dF_out,f (x_f - x_P), exact for uniform fields, so
+/// that cell velocities are corrected consistently with the face fluxes on any cell shape.
+/// dF_f = -gamma_f ortho_f (phi_R - phi_L); phi with ghosts filled.
+void flux_consistent_correction(const FaceGeometry& g, CellView phi,
+                                const std::vector<double>& gamma_i,
+                                const std::vector<double>& gamma_j, CellView du, CellView dv);
+
 /// F = A . avg(u) on every face (start-up fluxes, no pressure term).
 void interpolated_face_flux(const FaceGeometry& g, CellView u, CellView v,
                             std::vector<double>& flux_i, std::vector<double>& flux_j);

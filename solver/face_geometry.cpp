@@ -48,6 +48,9 @@ FaceGeometry make_face_geometry(const GridMetrics& m, const Connectivity& c,
     g.ni = m.ni;
     g.nj = m.nj;
     g.volume = m.volume;
+    g.centroid = m.centroid;
+    g.i_faces.center = m.face_center_i;
+    g.j_faces.center = m.face_center_j;
     const int ni = m.ni, nj = m.nj;
     FaceFamily& fi_ = g.i_faces;
     fi_.area = m.area_i;

@@ -26,6 +26,7 @@ struct FaceFamily {
     std::vector<Vec2> delta;                       ///< x_R - x_L (chords)
     std::vector<double> ortho;                     ///< |A|^2 / (A . delta) (dimensionless)
     std::vector<Vec2> skew;                        ///< A - ortho delta (chords)
+    std::vector<Vec2> center;                      ///< face midpoint (chords)
     std::vector<std::uint8_t> physical;            ///< 1 on physical boundary faces
     std::vector<std::uint8_t> velocity_dirichlet;  ///< 1 where the velocity is prescribed
 };
@@ -35,6 +36,7 @@ struct FaceGeometry {
     int ni = 0;
     int nj = 0;
     std::vector<double> volume;  ///< cell areas (chords^2), ni * nj
+    std::vector<Vec2> centroid;  ///< cell centroids (chords), ni * nj
     FaceFamily i_faces;          ///< (ni + 1) * nj
     FaceFamily j_faces;          ///< ni * (nj + 1)
 

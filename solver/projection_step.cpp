@@ -4,7 +4,8 @@
 ///      + nu lap u* + f, convection linearised on the extrapolated fluxes;
 ///   2. Rhie-Chow predicted fluxes F* (face_flux.hpp);
 ///   3. L(phi) = div F* / gamma with gamma = dt / alpha0 (steady: per-face local steps);
-///   4. F^{n+1} = F* - gamma grad_f phi, u^{n+1} = u* - gamma grad phi, p^{n+1} = p^n + phi.
+///   4. F^{n+1} = F* - gamma grad_f phi, u^{n+1} = u* + (cell change reconstructed from the
+///      face-flux changes, face_flux.hpp), p^{n+1} = p^n + phi.
 #include <algorithm>
 #include <cmath>
 #include <string>
@@ -86,14 +87,16 @@ PressureSolveStats project(FlowSolverCore& s, double gamma_uniform, bool steady)
         std::fill(s.gamma_j.begin(), s.gamma_j.end(), gamma_uniform);
     }
     correct_face_flux(s.geom, s.increment.view(), s.gamma_i, s.gamma_j, s.flux_i_new, s.flux_j_new);
-    green_gauss_gradient(s.geom, s.increment.view(), s.phix.view(), s.phiy.view());
+    // Cell velocities corrected from the face-flux corrections, not from a Green-Gauss
+    // gradient of phi: on stretched, skewed cells (C-grid wake near the outlets) the two differ
+    // enough for the cell-centred divergence to grow step after step.
+    flux_consistent_correction(s.geom, s.increment.view(), s.gamma_i, s.gamma_j, s.phix.view(),
+                               s.phiy.view());
     CellView un = s.vel_new.u.view(), vn = s.vel_new.v.view(), p = s.pressure.view();
     CellView gx = s.phix.view(), gy = s.phiy.view(), phi = s.increment.view();
-    CellView ldt = s.local_dt.view();
     for_each_cell({0, s.geom.ni, 0, s.geom.nj}, [&](int i, int j) {
-        const double g = steady ? ldt(i, j) : gamma_uniform;
-        un(i, j) -= g * gx(i, j);
-        vn(i, j) -= g * gy(i, j);
+        un(i, j) += gx(i, j);
+        vn(i, j) += gy(i, j);
         p(i, j) += phi(i, j);
     });
     return st;
