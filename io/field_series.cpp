@@ -1,10 +1,10 @@
 #include "io/field_series.hpp"
 
 #include <algorithm>
+#include <cctype>
 #include <charconv>
 #include <cstdio>
 #include <fstream>
-#include <regex>
 #include <sstream>
 
 #include "io/atomic_file.hpp"
@@ -16,7 +16,17 @@ namespace fs = std::filesystem;
 
 namespace {
 
-const std::regex frame_name_pattern(R"(fields_(\d+)\.vts)");
+// The frame number of a file named fields_<digits>.vts, or -1.
+int frame_number(const std::string& file) {
+    const std::string head = "fields_", tail = ".vts";
+    if (file.size() <= head.size() + tail.size() || !file.starts_with(head) ||
+        !file.ends_with(tail))
+        return -1;
+    const std::string digits = file.substr(head.size(), file.size() - head.size() - tail.size());
+    int n = 0;
+    const auto r = std::from_chars(digits.data(), digits.data() + digits.size(), n);
+    return r.ec == std::errc() && r.ptr == digits.data() + digits.size() ? n : -1;
+}
 
 // Shortest text that reads back to the same double: the .pvd times are exact.
 std::string exact_text(double v) {
@@ -25,10 +35,15 @@ std::string exact_text(double v) {
     return std::string(buf, r.ptr);
 }
 
+// The value of name="..." in one XML tag; empty when absent.
 std::string attribute(const std::string& tag, const std::string& name) {
-    const std::regex pattern("\\b" + name + "\\s*=\\s*\"([^\"]*)\"");
-    std::smatch m;
-    return std::regex_search(tag, m, pattern) ? m[1].str() : std::string();
+    const std::string key = name + "=\"";
+    for (std::size_t at = tag.find(key); at != std::string::npos; at = tag.find(key, at + 1)) {
+        if (at == 0 || !std::isspace(static_cast<unsigned char>(tag[at - 1]))) continue;
+        const std::size_t begin = at + key.size(), end = tag.find('"', begin);
+        if (end != std::string::npos) return tag.substr(begin, end - begin);
+    }
+    return {};
 }
 
 std::string xml_escaped(const std::string& s) {
@@ -67,10 +82,10 @@ std::vector<SeriesFrame> read_pvd(const fs::path& path) {
                          ": not a VTK collection file (no <Collection>); move it away or start "
                          "the run afresh");
     std::vector<SeriesFrame> frames;
-    const std::regex dataset_tag(R"(<DataSet\b[^>]*>)");
-    for (auto it = std::sregex_iterator(text.begin(), text.end(), dataset_tag);
-         it != std::sregex_iterator(); ++it) {
-        const std::string tag = it->str();
+    for (std::size_t at = text.find("<DataSet"); at != std::string::npos;
+         at = text.find("<DataSet", at + 1)) {
+        const std::size_t end = text.find('>', at);
+        const std::string tag = text.substr(at, end == std::string::npos ? end : end - at + 1);
         const std::string t = attribute(tag, "timestep");
         SeriesFrame f;
         const auto r = std::from_chars(t.data(), t.data() + t.size(), f.time);
@@ -98,11 +113,7 @@ void FieldSeries::discard_after(double time) {
 
 int FieldSeries::next_number() const {
     int next = 0;
-    for (const SeriesFrame& f : m_frames) {
-        std::smatch m;
-        if (std::regex_match(f.file, m, frame_name_pattern))
-            next = std::max(next, std::stoi(m[1].str()) + 1);
-    }
+    for (const SeriesFrame& f : m_frames) next = std::max(next, frame_number(f.file) + 1);
     return next;
 }
 
