@@ -1,0 +1,96 @@
+#include "postprocess/time_average.hpp"
+
+#include <algorithm>
+#include <cmath>
+
+#include "mesh/errors.hpp"
+
+namespace veer {
+
+namespace {
+
+struct LevelBand {
+    double level = 0.0, band = 0.0, spread = 0.0;
+    bool steady() const { return spread < 1e-6 * std::max(1.0, std::abs(level)); }
+};
+
+/// Level and band from prefix sums of the samples [n/2, n).
+LevelBand level_band(const std::vector<double>& sum, const std::vector<double>& sum_sq) {
+    const std::size_t n = sum.size() - 1, h = n / 2, m = n - h;
+    LevelBand r;
+    if (m == 0) return r;
+    r.level = (sum[n] - sum[h]) / static_cast<double>(m);
+    const double var = (sum_sq[n] - sum_sq[h]) / static_cast<double>(m) - r.level * r.level;
+    r.spread = std::sqrt(std::max(var, 0.0));
+    r.band = 0.5 * r.spread;
+    return r;
+}
+
+void prefix_sums(const std::vector<double>& s, std::vector<double>& sum,
+                 std::vector<double>& sum_sq) {
+    sum.assign(1, 0.0);
+    sum_sq.assign(1, 0.0);
+    for (double x : s) {
+        sum.push_back(sum.back() + x);
+        sum_sq.push_back(sum_sq.back() + x * x);
+    }
+}
+
+/// Time where the line through (t0, f0), (t1, f1) reaches `level`.
+double crossing_time(double t0, double f0, double t1, double f1, double level) {
+    return f1 == f0 ? t1 : t0 + (t1 - t0) * (level - f0) / (f1 - f0);
+}
+
+double value_at(const std::vector<double>& t, const std::vector<double>& f, std::size_t k,
+                double at) {
+    const double w = (at - t[k]) / (t[k + 1] - t[k]);
+    return f[k] + w * (f[k + 1] - f[k]);
+}
+
+}  // namespace
+
+std::vector<double> upward_crossings(const std::vector<double>& time,
+                                     const std::vector<double>& signal, double level, double band) {
+    VEER_VERIFY(time.size() == signal.size(), "time and signal differ in length");
+    std::vector<double> out;
+    bool armed = false;
+    for (std::size_t k = 0; k < signal.size(); ++k) {
+        if (signal[k] < level - band) armed = true;
+        if (armed && k > 0 && signal[k - 1] < level && signal[k] >= level) {
+            out.push_back(crossing_time(time[k - 1], signal[k - 1], time[k], signal[k], level));
+            armed = false;
+        }
+    }
+    return out;
+}
+
+std::optional<CycleWindow> last_whole_cycles(const std::vector<double>& time,
+                                             const std::vector<double>& signal, int max_cycles) {
+    VEER_VERIFY(max_cycles >= 1, "ask for at least one cycle");
+    std::vector<double> sum, sum_sq;
+    prefix_sums(signal, sum, sum_sq);
+    const LevelBand lb = level_band(sum, sum_sq);
+    if (signal.size() < 3 || lb.steady()) return std::nullopt;
+    const std::vector<double> c = upward_crossings(time, signal, lb.level, lb.band);
+    if (c.size() < 2) return std::nullopt;
+    const int n = std::min(max_cycles, static_cast<int>(c.size()) - 1);
+    return CycleWindow{c[c.size() - 1 - static_cast<std::size_t>(n)], c.back(), n};
+}
+
+double window_average(const std::vector<double>& t, const std::vector<double>& f,
+                      const CycleWindow& w) {
+    VEER_VERIFY(t.size() == f.size() && t.size() >= 2, "window average needs two samples");
+    VEER_VERIFY(w.end > w.begin, "empty averaging window");
+    double integral = 0.0;
+    // Start at the sample interval holding w.begin (times increase).
+    const auto first = std::upper_bound(t.begin(), t.end(), w.begin);
+    const std::size_t k0 = first == t.begin() ? 0 : static_cast<std::size_t>(first - t.begin()) - 1;
+    for (std::size_t k = k0; k + 1 < t.size() && t[k] < w.end; ++k) {
+        const double a = std::max(t[k], w.begin), b = std::min(t[k + 1], w.end);
+        if (b <= a) continue;
+        integral += 0.5 * (b - a) * (value_at(t, f, k, a) + value_at(t, f, k, b));
+    }
+    return integral / (w.end - w.begin);
+}
+
+}  // namespace veer

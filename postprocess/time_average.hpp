@@ -1,0 +1,98 @@
+#pragma once
+/// Time averages of time-accurate runs: whole-cycle detection from a lift signal, averages of
+/// scalar histories over whole cycles, and running means of the fields per cycle.
+///
+/// Cycles start at upward crossings of the signal's level, with hysteresis: after one crossing
+/// the signal must fall below level - band (band = half the signal's standard deviation) before
+/// the next counts. Crossing times are interpolated linearly between samples. The level and band
+/// come from the second half of the record (offline, and online until two crossings are seen);
+/// online they are then fixed at each crossing to those of the kept whole cycles.
+///
+/// What to average how: quantities linear in the fields (surface forces, Cp, Cf, circulation,
+/// wake v profiles) can be evaluated on mean fields; the control-volume route is quadratic in the
+/// velocity (u (u.n)), so its average is the average of its instantaneous values over the window.
+#include <deque>
+#include <optional>
+#include <vector>
+
+#include "solver/flow_fields.hpp"
+
+namespace veer {
+
+/// A time window of whole cycles.
+struct CycleWindow {
+    double begin = 0.0;  ///< time of the first upward crossing of the window
+    double end = 0.0;    ///< time of the last one
+    int cycles = 0;
+    double period() const { return (end - begin) / cycles; }
+};
+
+/// Upward crossings of `level` by a sampled signal, with hysteresis `band` (see above).
+std::vector<double> upward_crossings(const std::vector<double>& time,
+                                     const std::vector<double>& signal, double level, double band);
+
+/// The last `max_cycles` whole cycles of a record (fewer when it holds fewer, at least one);
+/// nullopt when it holds no whole cycle or the signal is steady (its spread below
+/// 1e-6 * max(1, |mean|)).
+std::optional<CycleWindow> last_whole_cycles(const std::vector<double>& time,
+                                             const std::vector<double>& signal, int max_cycles);
+
+/// Mean of a sampled signal over [window.begin, window.end] (trapezoidal, ends interpolated).
+double window_average(const std::vector<double>& time, const std::vector<double>& signal,
+                      const CycleWindow& window);
+
+/// Time-weighted running mean of the flow fields (u, v, pressure, eddy viscosity).
+class FieldMean {
+public:
+    /// Adds fields that stand for a time span `weight` (the step that produced them).
+    void add(const FlowFields& fields, double weight);
+    /// Adds another mean (for combining cycles).
+    void add(const FieldMean& other);
+    FlowFields mean() const;
+    double duration() const { return m_duration; }
+    bool empty() const { return m_duration <= 0.0; }
+
+private:
+    void add_weighted(const FlowFields& fields, double weight);
+    FlowFields m_sum;
+    double m_duration = 0.0;
+};
+
+/// Per-cycle field means, fed once per time step; cycles detected online from the lift.
+class CycleAverager {
+public:
+    /// Keeps the means of the last `keep_cycles` completed cycles.
+    explicit CycleAverager(int keep_cycles = 8);
+
+    /// The step that ended at `time` took `dt` and produced `fields` with lift coefficient `cl`.
+    void add(double time, double dt, double cl, const FlowFields& fields);
+
+    int completed_cycles() const { return static_cast<int>(m_cycles.size()); }
+    /// The window of the last n completed cycles (n clamped to those kept); nullopt if none.
+    std::optional<CycleWindow> window(int n) const;
+    /// Mean fields over the last n completed cycles (n clamped); throws if none is complete.
+    FlowFields mean_of_last(int n) const;
+
+private:
+    struct Cycle {
+        double begin = 0.0, end = 0.0;
+        FieldMean fields;
+    };
+    void start_cycle(double at);
+    /// Level and spread of the signal over the second half of the record (before two
+    /// crossings), then fixed at each crossing to those of the kept whole cycles, integrated
+    /// between the crossing times, so that the level does not wander within a cycle.
+    void level_and_spread(double& level, double& spread) const;
+    void update_level();
+
+    int m_keep;
+    std::vector<double> m_time, m_signal, m_signal_sq, m_sum, m_sum_sq;  // with prefix sums
+    bool m_armed = false;
+    std::optional<double> m_cycle_begin;  // none before the first crossing
+    std::deque<double> m_crossings;       // times of the kept crossings
+    std::optional<double> m_level, m_spread;
+    FieldMean m_current;
+    std::deque<Cycle> m_cycles;
+};
+
+}  // namespace veer
