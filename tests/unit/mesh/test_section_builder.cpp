@@ -133,8 +133,9 @@ TEST(SectionBuilder, BluntTrailingEdgeIsClosedWithAWedge) {
 }
 
 TEST(SectionBuilder, ThickBaseIsClosedDownstreamOfItsMidpoint) {
-    // 0012 cut at x = 0.9: base 0.0208 thick, surfaces converging at 7 deg would meet 0.08 chord
-    // behind, beyond the 0.02 reach: the tip goes one base height behind the base midpoint.
+    // 0012 cut at x = 0.9: base 2 y_t(0.9) = 0.029 thick, surfaces converging at 7 deg would meet
+    // 0.12 chord behind, beyond the 0.02 reach: the tip goes one base height behind the base
+    // midpoint. Round-off of the normalisation: 1e-12.
     RawOutline raw = naca_outline("0012", TrailingEdge::open, 161);
     std::vector<Vec2> cut;
     for (const Vec2& p : raw.points) {
