@@ -31,6 +31,8 @@ void check_settings(const FlowConditions& c, const SolverSettings& s) {
     if (s.momentum_sweeps < 1) fail("momentum_sweeps", s.momentum_sweeps, ">= 1");
     if (s.momentum_max_sweeps < 1) fail("momentum_max_sweeps", s.momentum_max_sweeps, ">= 1");
     if (!(s.pressure_tolerance > 0.0)) fail("pressure_tolerance", s.pressure_tolerance, "> 0");
+    if (!(s.steady_pressure_tolerance > 0.0 && s.steady_pressure_tolerance < 1.0))
+        fail("steady_pressure_tolerance", s.steady_pressure_tolerance, "in (0, 1)");
     if (!(s.vortex_relaxation >= 0.0 && s.vortex_relaxation <= 1.0))
         fail("vortex_relaxation", s.vortex_relaxation, "in [0, 1]");
 }

@@ -79,7 +79,8 @@ PressureSolveStats project(FlowSolverCore& s, double gamma_uniform, bool steady)
         s.phi[k] = 0.0;
     }
     const PressureSolveStats st = s.pressure_solver->solve(
-        s.rhs, s.phi, s.settings.pressure_tolerance, s.settings.pressure_max_iterations);
+        s.rhs, s.phi, steady ? s.settings.steady_pressure_tolerance : s.settings.pressure_tolerance,
+        s.settings.pressure_max_iterations);
     s.increment.set_interior(s.phi);
     fill_increment_ghosts(s.faces, s.connectivity, s.increment.view());
     if (!steady) {

@@ -62,7 +62,6 @@ double cavity_deviation(double reynolds, int n, bool use_re1000, double* seconds
     const StructuredGrid grid = test::cartesian_block(n, n, 0.0, 1.0, 0.0, 1.0);
     SolverSettings s;
     s.mode = TimeMode::steady;
-    s.pressure_solver = PressureSolverKind::eigen_cg;
     s.velocity_overrides = {moving_wall("top", {1.0, 0.0})};
     FlowSolver solver(grid, {reynolds, 0.0}, s);
     FlowFields zero;

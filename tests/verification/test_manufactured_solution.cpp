@@ -48,7 +48,6 @@ Errors solve_on(int n) {
     const StructuredGrid grid = test::distorted_unit_square(n, n);
     SolverSettings s;
     s.mode = TimeMode::steady;
-    s.pressure_solver = PressureSolverKind::eigen_cg;
     for (const char* side : {"left", "right", "bottom", "top"})
         s.velocity_overrides.push_back({side, exact_velocity});
     s.body_force = body_force;
