@@ -69,7 +69,7 @@ TEST(Naca, TrailingEdgeGapAndThicknessMatchThePublishedFigures) {
     EXPECT_EQ(closed.points.front().x, closed.points.back().x);
     EXPECT_EQ(closed.points.front().y, closed.points.back().y);
     // maximum thickness t near 30% chord (NACA Report 460); sampled every 0.001 chord, the
-    // maximum of the formula is 0.12004 at x = 0.2966: 0.1% of t covers the coefficients' rounding
+    // maximum of the formula is 0.120035 at x = 0.2998: 0.1% of t covers the coefficients' rounding
     double best = 0.0, at = 0.0;
     for (int k = 0; k <= 1000; ++k) {
         const double x = k / 1000.0;
