@@ -6,6 +6,7 @@
 #include <sstream>
 
 #include "mesh/errors.hpp"
+#include "postprocess/free_stream.hpp"
 
 namespace veer {
 
@@ -57,16 +58,18 @@ std::vector<WakeSample> clip(std::vector<WakeSample> all, double lo, double hi) 
 }
 
 void integrate(WakeProfile& p, double alpha_deg) {
-    double uv = 0.0, uu = 0.0, u = 0.0;
+    const Vec2 e_lift = lift_direction(alpha_deg);
+    double uv = 0.0, uu = 0.0, u = 0.0, ul = 0.0;
     for (std::size_t k = 1; k < p.samples.size(); ++k) {
         const WakeSample &a = p.samples[k - 1], &b = p.samples[k];
         const double h = 0.5 * (b.y - a.y);
         uv += h * (a.u * a.v + b.u * b.v);
         uu += h * (a.u * a.u + b.u * b.u);
         u += h * (a.u + b.u);
+        ul += h * (a.u * dot({a.u, a.v}, e_lift) + b.u * dot({b.u, b.v}, e_lift));
     }
     p.vertical_momentum_flux = uv;
-    p.downward_momentum_flux = -uv;
+    p.downward_momentum_flux = -ul;
     p.mass_flux = u;
     p.mean_flow_angle_deg = degrees(std::atan2(uv, uu));
     p.turning_deg = p.mean_flow_angle_deg - alpha_deg;

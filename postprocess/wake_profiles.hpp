@@ -7,8 +7,11 @@
 /// own resolution sets the profile's. The band |y - y_te| <= half_height is kept, its ends
 /// interpolated. Integrals are trapezoidal in y over the band (rho = 1):
 ///
-///   vertical momentum flux  M_y = int u v dy   (downward flux -M_y > 0 when the flow is turned
-///                                                down, as behind a lifting section)
+///   vertical momentum flux  M_y = int u v dy   (chord frame)
+///   downward momentum flux  D   = - int u (u . e_lift) dy, e_lift = (-sin a, cos a): the flux
+///                                 of momentum normal to the free stream, zero for the undisturbed
+///                                 stream and positive when the flow is turned down, as behind a
+///                                 lifting section (equal to -M_y at a = 0)
 ///   mass flux               Q   = int u dy
 ///   mean flow angle         theta = atan2(int u v dy, int u u dy): direction of the net momentum
 ///                                   flux through the band
@@ -36,7 +39,7 @@ struct WakeProfile {
     double x = 0.0;                       ///< x of the line
     std::vector<WakeSample> samples;      ///< ordered by y, band ends included
     double vertical_momentum_flux = 0.0;  ///< int u v dy
-    double downward_momentum_flux = 0.0;  ///< - int u v dy
+    double downward_momentum_flux = 0.0;  ///< - int u (u . e_lift) dy
     double mass_flux = 0.0;               ///< int u dy
     double mean_flow_angle_deg = 0.0;
     double turning_deg = 0.0;   ///< mean flow angle - alpha

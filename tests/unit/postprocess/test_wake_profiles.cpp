@@ -44,7 +44,10 @@ TEST(WakeProfiles, LinearVerticalVelocityIntegratesExactly) {
         EXPECT_NEAR(p.samples.front().y, -0.8, 1e-14);
         EXPECT_NEAR(p.samples.back().y, 0.8, 1e-14);
         EXPECT_NEAR(p.vertical_momentum_flux, 1.6 * v_mid, 1e-13);
-        EXPECT_NEAR(p.downward_momentum_flux, -1.6 * v_mid, 1e-13);
+        // Normal to the free stream at 2 degrees: -int u (v cos a - u sin a) dy.
+        const double a_rad = 2.0 * std::numbers::pi / 180.0;
+        EXPECT_NEAR(p.downward_momentum_flux, -1.6 * (v_mid * std::cos(a_rad) - std::sin(a_rad)),
+                    1e-13);
         EXPECT_NEAR(p.mass_flux, 1.6, 1e-13);
         const double angle = std::atan2(1.6 * v_mid, 1.6) * 180.0 / std::numbers::pi;
         EXPECT_NEAR(p.mean_flow_angle_deg, angle, 1e-11);
