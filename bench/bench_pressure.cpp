@@ -4,6 +4,7 @@
 // asserts nothing (performance figures come only from bench/).
 //
 //   bench_pressure [--max-around N] [--eigen-max-around N] [--bicgstab] [--repeats R]
+//                  [--cycle-index 1|2] [--smoothing-steps S] [--no-along-c-lines]
 #include <omp.h>
 #include <time.h>
 
@@ -37,6 +38,7 @@ struct Options {
     int eigen_max_around = 1024;
     bool bicgstab = false;
     int repeats = 3;
+    MultigridOptions multigrid;
 };
 
 Options parse(int argc, char** argv) {
@@ -166,7 +168,7 @@ int main(int argc, char** argv) {
     for (int around = 128; around <= o.max_around; around *= 2) {
         const Problem pb = make_problem(around);
         const double cells = static_cast<double>(pb.rhs.size());
-        MultigridSolver mg;
+        MultigridSolver mg(o.multigrid);
         const Timing t_mg = time_solver(mg, pb, o.repeats);
         std::printf("%d x %d (ni %d, nj %d, %.0f cells, %d levels)\n", around, around / 4,
                     pb.stencil.ni, pb.stencil.nj, cells, mg.level_count());

@@ -55,7 +55,10 @@ LineRelaxation::LineRelaxation(const PoissonStencil& s, const PressureOperator& 
             add_line(op, line.cells, line.prev);
         }
     }
-    colour_lines(op);
+    m_lines = static_cast<int>(m_line_begin.size()) - 1;
+    // Wall-normal lines side by side in chunks of 32 (rows of 32 cells, every colour-th column);
+    // along-C lines are long and contiguous already: one per chunk.
+    pack(colour_lines(op), direction == Direction::j_lines ? 32 : 1);
     m_work.assign(m_cell.size(), 0.0);
 }
 
@@ -100,8 +103,8 @@ void LineRelaxation::add_line(const PressureOperator& op, const std::vector<int>
     m_line_begin.push_back(static_cast<int>(m_cell.size()));
 }
 
-void LineRelaxation::colour_lines(const PressureOperator& op) {
-    const int lines = line_count();
+std::vector<int> LineRelaxation::colour_lines(const PressureOperator& op) const {
+    const int lines = static_cast<int>(m_line_begin.size()) - 1;
     std::vector<int> line_of(op.rows.size(), -1), colour(static_cast<std::size_t>(lines), -1);
     for (int l = 0; l < lines; ++l)
         for (int p = m_line_begin[static_cast<std::size_t>(l)]; p < m_line_begin[l + 1u]; ++p)
@@ -123,36 +126,76 @@ void LineRelaxation::colour_lines(const PressureOperator& op) {
         colour[static_cast<std::size_t>(l)] = static_cast<int>(free);
         colours = std::max(colours, static_cast<int>(free) + 1);
     }
-    m_colour_begin.assign(1, 0);
-    for (int c = 0; c < colours; ++c) {
-        for (int l = 0; l < lines; ++l)
-            if (colour[static_cast<std::size_t>(l)] == c) m_order.push_back(l);
-        m_colour_begin.push_back(static_cast<int>(m_order.size()));
-    }
+    return colour;
 }
 
-void LineRelaxation::relax_line(const PressureOperator& op, const double* b, double* x,
-                                int line) const {
-    const int p0 = m_line_begin[static_cast<std::size_t>(line)];
-    const int p1 = m_line_begin[static_cast<std::size_t>(line) + 1];
+namespace {
+template <class T>
+void reorder(std::vector<T>& v, const std::vector<int>& from) {
+    std::vector<T> out(from.size());
+    for (std::size_t k = 0; k < from.size(); ++k) out[k] = v[static_cast<std::size_t>(from[k])];
+    v.swap(out);
+}
+}  // namespace
+
+void LineRelaxation::pack(const std::vector<int>& colour, int chunk_width) {
+    const int colours = colour.empty() ? 0 : *std::max_element(colour.begin(), colour.end()) + 1;
+    std::vector<int> from;  // packed position -> line-by-line position
+    from.reserve(m_cell.size());
+    m_colour_begin.assign(1, 0);
+    for (int c = 0; c < colours; ++c) {
+        std::vector<int> group;  // lines of this colour, in line order, cut into chunks
+        auto flush = [&] {
+            if (group.empty()) return;
+            const int length = m_line_begin[group[0] + 1u] - m_line_begin[group[0] + 0u];
+            m_chunks.push_back(
+                {static_cast<int>(from.size()), static_cast<int>(group.size()), length});
+            for (int k = 0; k < length; ++k)
+                for (int l : group) from.push_back(m_line_begin[static_cast<std::size_t>(l)] + k);
+            group.clear();
+        };
+        for (int l = 0; l < m_lines; ++l) {
+            if (colour[static_cast<std::size_t>(l)] != c) continue;
+            const int length = m_line_begin[l + 1u] - m_line_begin[static_cast<std::size_t>(l)];
+            if (!group.empty() &&
+                (static_cast<int>(group.size()) == chunk_width ||
+                 length != m_line_begin[group[0] + 1u] - m_line_begin[group[0] + 0u]))
+                flush();
+            group.push_back(l);
+        }
+        flush();
+        m_colour_begin.push_back(static_cast<int>(m_chunks.size()));
+    }
+    reorder(m_cell, from);
+    reorder(m_off_line, from);
+    reorder(m_lower, from);
+    reorder(m_upper_over, from);
+    reorder(m_inv_pivot, from);
+    m_line_begin.assign(1, 0);  // no longer meaningful after packing
+}
+
+void LineRelaxation::relax_chunk(const PressureOperator& op, const double* b, double* x,
+                                 const Chunk& ch) const {
+    const std::size_t n = static_cast<std::size_t>(ch.lines);
+    const std::size_t p0 = static_cast<std::size_t>(ch.base);
+    const std::size_t p1 = p0 + n * static_cast<std::size_t>(ch.length);
     double* y = m_work.data();
-    double y_prev = 0.0;
-    for (int p = p0; p < p1; ++p) {  // off-line couplings to the right-hand side, eliminate
-        const auto q = static_cast<std::size_t>(p);
-        const int c = m_cell[q];
+    // Forward elimination, off-line couplings (old values) moved to the right-hand side. Every
+    // right-hand side is formed before any x of this chunk is written.
+    for (std::size_t p = p0; p < p1; ++p) {
+        const int c = m_cell[p];
         const PressureRow& row = op.rows[static_cast<std::size_t>(c)];
         double r = b[c];
-        const unsigned off = m_off_line[q];
+        const unsigned off = m_off_line[p];
         for (std::size_t s = 0; s < 4; ++s)
             if (off & (1u << s)) r += row.coupling[s] * x[row.neighbour[s]];
-        y_prev = (r + m_lower[q] * y_prev) * m_inv_pivot[q];
-        y[q] = y_prev;
+        const double y_prev = p >= p0 + n ? y[p - n] : 0.0;
+        y[p] = (r + m_lower[p] * y_prev) * m_inv_pivot[p];
     }
-    double x_next = 0.0;
-    for (int p = p1 - 1; p >= p0; --p) {  // back substitution
-        const auto q = static_cast<std::size_t>(p);
-        x_next = y[q] + m_upper_over[q] * x_next;
-        x[m_cell[q]] = x_next;
+    // Back substitution, last position of every line first.
+    for (std::size_t p = p1; p-- > p0;) {
+        if (p + n < p1) y[p] += m_upper_over[p] * y[p + n];
+        x[m_cell[p]] = y[p];
     }
 }
 
@@ -164,9 +207,9 @@ void LineRelaxation::sweep(const PressureOperator& op, const std::vector<double>
         const int c = forward ? k : colours - 1 - k;
         const int first = m_colour_begin[static_cast<std::size_t>(c)];
         const int count = m_colour_begin[static_cast<std::size_t>(c) + 1] - first;
-        const int* order = m_order.data() + first;
+        const Chunk* chunks = m_chunks.data() + first;
         parallel_for(count, min_parallel,
-                     [&](int l) { relax_line(op, b.data(), x.data(), order[l]); });
+                     [&](int l) { relax_chunk(op, b.data(), x.data(), chunks[l]); });
     }
 }
 

@@ -31,24 +31,36 @@ public:
     void sweep(const PressureOperator& op, const std::vector<double>& b, std::vector<double>& x,
                bool forward) const;
 
-    int line_count() const { return static_cast<int>(m_line_begin.size()) - 1; }
+    int line_count() const { return m_lines; }
     int colour_count() const { return static_cast<int>(m_colour_begin.size()) - 1; }
 
 private:
-    void add_line(const PressureOperator& op, const std::vector<int>& cells,
-                  const std::vector<int>& next_slot);
-    void colour_lines(const PressureOperator& op);
-    void relax_line(const PressureOperator& op, const double* b, double* x, int line) const;
+    /// Lines of one colour and one length, stored position-major (position k of every line, then
+    /// k + 1, ...), so that relaxing side-by-side wall-normal lines walks the grid row by row.
+    struct Chunk {
+        int base = 0;    ///< first storage index
+        int lines = 0;   ///< lines in the chunk
+        int length = 0;  ///< cells per line
+    };
 
-    std::vector<int> m_line_begin{0};       ///< line l holds positions [begin[l], begin[l+1])
-    std::vector<int> m_cell;                ///< cell at each position
+    void add_line(const PressureOperator& op, const std::vector<int>& cells,
+                  const std::vector<int>& prev_slot);
+    std::vector<int> colour_lines(const PressureOperator& op) const;
+    void pack(const std::vector<int>& colour, int chunk_width);
+    void relax_chunk(const PressureOperator& op, const double* b, double* x,
+                     const Chunk& chunk) const;
+
+    // Per stored position (cell of a line): built line by line, then packed into chunks.
+    std::vector<int> m_line_begin{0};       ///< while building: line l at [begin[l], begin[l+1])
+    std::vector<int> m_cell;                ///< cell index
     std::vector<unsigned char> m_off_line;  ///< bit s set: slot s of that cell is off the line
     std::vector<double> m_lower;            ///< coupling to the previous cell of the line (>= 0)
     std::vector<double> m_upper_over;       ///< Thomas factor: upper coupling / pivot
     std::vector<double> m_inv_pivot;        ///< Thomas factor: 1 / pivot
-    std::vector<int> m_colour_begin{0};     ///< lines of colour c: m_order[begin[c] .. begin[c+1])
-    std::vector<int> m_order;               ///< line indices sorted by colour
-    mutable std::vector<double> m_work;     ///< forward-elimination values, one per position
+    std::vector<Chunk> m_chunks;            ///< by colour
+    std::vector<int> m_colour_begin{0};     ///< chunks of colour c: [begin[c], begin[c+1])
+    int m_lines = 0;
+    mutable std::vector<double> m_work;  ///< elimination values, one per position
 };
 
 }  // namespace veer

@@ -69,7 +69,7 @@ void MultigridSolver::cycle(std::size_t l) {
     }
     for (int s = 0; s < m_options.smoothing_steps; ++s) {
         level.j_lines.sweep(level.op, level.b, level.x, true);
-        level.i_lines.sweep(level.op, level.b, level.x, true);
+        if (m_options.along_c_lines) level.i_lines.sweep(level.op, level.b, level.x, true);
     }
     operator_residual(level.op, level.b, level.x, level.r);
     Level& coarse = m_levels[l + 1];
@@ -94,7 +94,7 @@ void MultigridSolver::cycle(std::size_t l) {
         for (int i = 0; i < ni; ++i) x[i + ni * j] += xc[i / 2 + nic * (j / 2)];
     });
     for (int s = 0; s < m_options.smoothing_steps; ++s) {  // adjoint of the pre-smoothing
-        level.i_lines.sweep(level.op, level.b, level.x, false);
+        if (m_options.along_c_lines) level.i_lines.sweep(level.op, level.b, level.x, false);
         level.j_lines.sweep(level.op, level.b, level.x, false);
     }
 }

@@ -18,11 +18,12 @@ namespace veer {
 
 /// Knobs of the multigrid (defaults are what the tests and benchmark use).
 struct MultigridOptions {
-    int max_levels = 0;       ///< 0: as many as the grid allows
-    int coarsest_cells = 64;  ///< stop coarsening at or below this many cells
-    int smoothing_steps = 1;  ///< pre- and post-smoothing steps (each: j-lines then i-lines)
-    bool krylov = true;       ///< true: MG-PCG; false: plain V-cycles (for studying the cycle)
-    int cycle_index = 2;      ///< coarse-grid visits per level: 1 = V-cycle, 2 = W-cycle
+    int max_levels = 0;         ///< 0: as many as the grid allows
+    int coarsest_cells = 64;    ///< stop coarsening at or below this many cells
+    int smoothing_steps = 1;    ///< pre- and post-smoothing steps (each: j-lines then i-lines)
+    bool krylov = true;         ///< true: MG-PCG; false: plain V-cycles (for studying the cycle)
+    bool along_c_lines = true;  ///< smooth with i-lines too (after the wall-normal j-lines)
+    int cycle_index = 2;        ///< coarse-grid visits per level: 1 = V-cycle, 2 = W-cycle
 };
 
 class MultigridSolver final : public PressureSolver {

@@ -11,6 +11,6 @@ void parallel_for(int n, int min_parallel, Kernel&& kernel) {
 }
 
 /// Loops over cells: parallel above this many (about where two threads start to pay off).
-inline constexpr int parallel_cell_threshold = 8192;
+inline constexpr int parallel_cell_threshold = 16384;
 
 }  // namespace veer
