@@ -2,8 +2,10 @@
 
 #include <algorithm>
 #include <cmath>
+#include <numbers>
 
 #include "mesh/errors.hpp"
+#include "mesh/geometric_stretching.hpp"
 
 namespace veer {
 namespace {
@@ -62,45 +64,96 @@ void smooth_directions(const Layer& layer, double step, double eta, Layer& dirs)
     for (std::size_t i = 1; i < n; ++i) dirs[i] = unit(dirs[i]);
 }
 
-/// Diffuses values v_0 .. v_{m-1} implicitly, (1 + 2k) y_k - k (y_{k-1} + y_{k+1}) = v_k with
-/// zero-gradient ends, by the Thomas algorithm (run on each half of the layer from its outlet,
-/// so the two halves see the same arithmetic).
-void diffuse(std::vector<double>& v, double k) {
+/// Diffuses values v_0 .. v_{m-1} implicitly with coefficient k_q between v_q and v_{q+1}:
+/// (1 + k_{q-1} + k_q) y_q - k_{q-1} y_{q-1} - k_q y_{q+1} = v_q, zero-gradient ends, by the
+/// Thomas algorithm (run on each part of the layer in mirrored order, so the two sides see the
+/// same arithmetic).
+void diffuse(std::vector<double>& v, const std::vector<double>& k) {
     const std::size_t m = v.size();
-    if (k <= 0.0 || m < 2) return;
+    if (m < 2) return;
+    const auto left = [&](std::size_t q) { return q == 0 ? 0.0 : k[q - 1]; };
+    const auto right = [&](std::size_t q) { return q + 1 == m ? 0.0 : k[q]; };
     std::vector<double> c(m, 0.0);
-    const auto diag = [&](std::size_t q) { return 1.0 + (q == 0 || q + 1 == m ? k : 2.0 * k); };
-    c[0] = -k / diag(0);
-    v[0] = v[0] / diag(0);
-    for (std::size_t q = 1; q < m; ++q) {
-        const double den = diag(q) + k * c[q - 1];
-        c[q] = -k / den;
-        v[q] = (v[q] + k * v[q - 1]) / den;
+    for (std::size_t q = 0; q < m; ++q) {
+        const double den = (1.0 + left(q) + right(q)) - (q == 0 ? 0.0 : left(q) * c[q - 1]);
+        c[q] = right(q) / den;
+        v[q] = (v[q] + (q == 0 ? 0.0 : left(q) * v[q - 1])) / den;
     }
-    for (std::size_t q = m - 1; q-- > 0;) v[q] -= c[q] * v[q + 1];
+    for (std::size_t q = m - 1; q-- > 0;) v[q] += c[q] * v[q + 1];
+}
+
+/// How a part of a layer is re-spaced (see redistribute).
+struct Respacing {
+    double step = 0.0;        ///< this layer's step (chords)
+    double spread = 0.0;      ///< extra diffusion of log spacing (far field)
+    double pull = 0.0;        ///< blend towards a geometric spacing ...
+    double first_goal = 0.0;  ///< ... whose first step (chords) is at the part's last node
+};
+
+/// Arc-length fractions (0 .. 1) of nodes whose log spacings are `log_spacing`.
+std::vector<double> fractions_of(const std::vector<double>& log_spacing) {
+    std::vector<double> f(log_spacing.size() + 1, 0.0);
+    for (std::size_t k = 1; k < f.size(); ++k) f[k] = f[k - 1] + std::exp(log_spacing[k - 1]);
+    for (double& g : f) g /= f.back();
+    return f;
+}
+
+/// Goal fractions of a part: `near` shares squeezed spacings with their neighbours (diffusion of
+/// log spacing with coefficient 0.5 (step / spacing)^2, strong only where the step outgrows the
+/// spacing, as where lines converge at the trailing edge); `far` adds the far-field spread and
+/// the pull towards a geometric spacing.
+void goal_fractions(const Layer& layer, const Layer& previous, const std::vector<std::size_t>& idx,
+                    const Respacing& how, double length, std::vector<double>& near,
+                    std::vector<double>& far) {
+    const std::size_t m = idx.size() - 1;
+    std::vector<double> log_spacing(m), before(m), squeeze(m - 1), spread(m - 1);
+    for (std::size_t k = 0; k < m; ++k) {
+        before[k] = norm(previous[idx[k + 1]] - previous[idx[k]]);
+        // A floor keeps the logarithm finite where the provisional lines have nearly met.
+        const double now = norm(layer[idx[k + 1]] - layer[idx[k]]);
+        log_spacing[k] = std::log(std::max(now, 0.05 * before[k]));
+    }
+    for (std::size_t k = 0; k + 1 < m; ++k) {
+        const double ratio = how.step / std::min(before[k], before[k + 1]);
+        squeeze[k] = 0.5 * ratio * ratio;
+        spread[k] = squeeze[k] + how.spread;
+    }
+    std::vector<double> log_far = log_spacing;
+    diffuse(log_spacing, squeeze);
+    diffuse(log_far, spread);
+    near = fractions_of(log_spacing);
+    far = fractions_of(log_far);
+    if (how.pull <= 0.0) return;
+    const std::vector<double> steps = geometric_steps(how.first_goal, length, static_cast<int>(m));
+    double from_end = 0.0;  // the geometric spacing runs from idx[m] back to idx[0]
+    for (std::size_t k = m; k-- > 1;) {
+        from_end += steps[m - 1 - k];
+        far[k] = (1.0 - how.pull) * far[k] + how.pull * (1.0 - from_end / length);
+    }
 }
 
 /// Re-places the nodes idx[1 .. m-1] of a provisional layer along its own polyline (the end
-/// lines idx[0] and idx[m] stay). The spacings are those of the previous
-/// layer with their logarithm diffused by `spread` (0 near the wall), scaled to the new length.
-/// Keeping the previous spacings pushes nodes away from where lines converge (the trailing edge)
-/// instead of letting them pile up; the diffusion fans out clusters far from the wall.
+/// lines idx[0] and idx[m] stay): at the `near` goal, moved towards the `far` goal only as far as
+/// keeps every node within tan(20 deg) * step of the near goal, so j lines never lean more
+/// than that in one step however strong the far-field smoothing.
 void redistribute(Layer& layer, const Layer& previous, const std::vector<std::size_t>& idx,
-                  double spread) {
+                  const Respacing& how) {
     const std::size_t m = idx.size() - 1;
-    std::vector<double> arc(idx.size(), 0.0), log_spacing(m);
+    std::vector<double> arc(idx.size(), 0.0);
     for (std::size_t k = 1; k <= m; ++k)
         arc[k] = arc[k - 1] + norm(layer[idx[k]] - layer[idx[k - 1]]);
-    for (std::size_t k = 0; k < m; ++k)
-        log_spacing[k] = std::log(norm(previous[idx[k + 1]] - previous[idx[k]]));
-    diffuse(log_spacing, spread);
-    std::vector<double> goal(idx.size(), 0.0);
-    for (std::size_t k = 1; k <= m; ++k) goal[k] = goal[k - 1] + std::exp(log_spacing[k - 1]);
+    std::vector<double> near, far;
+    goal_fractions(layer, previous, idx, how, arc[m], near, far);
+    double widest = 0.0;
+    for (std::size_t k = 1; k < m; ++k)
+        widest = std::max(widest, arc[m] * std::abs(far[k] - near[k]));
+    const double max_shift = std::tan(20.0 * std::numbers::pi / 180.0) * how.step;
+    const double blend = widest > max_shift ? max_shift / widest : 1.0;
     std::vector<Vec2> pts(idx.size());
     for (std::size_t k = 0; k <= m; ++k) pts[k] = layer[idx[k]];
     std::size_t seg = 0;
     for (std::size_t k = 1; k < m; ++k) {
-        const double s = arc[m] * (goal[k] / goal[m]);
+        const double s = arc[m] * (near[k] + blend * (far[k] - near[k]));
         while (seg + 1 < m && arc[seg + 1] < s) ++seg;
         const double len = arc[seg + 1] - arc[seg];
         const double t = len > 0.0 ? std::clamp((s - arc[seg]) / len, 0.0, 1.0) : 0.0;
@@ -142,8 +195,16 @@ MarchOutcome march_layers(StructuredGrid& grid, const MarchPlan& plan) {
         if (j > 0) {  // the first layer keeps the exact wall normals
             smooth_directions(cur, step, eta, dirs);
             for (std::size_t i = 0; i < count; ++i) next[i] = cur[i] + step * dirs[i];
-            const double spread = plan.spread * eta * eta;
-            for (const auto& part : parts) redistribute(next, cur, part, spread);
+            // Surface halves first: the wake parts aim at the surface spacing next to the
+            // trailing-edge line, so the spacing is continuous across it far from the wall.
+            const double ramp = eta * eta;
+            for (std::size_t p : {2u, 3u})
+                redistribute(next, cur, parts[p], {step, plan.spread * ramp});
+            for (std::size_t p : {0u, 1u}) {
+                const std::size_t te_line = parts[p].back(), neighbour = parts[p + 2][1];
+                const double first = norm(next[neighbour] - next[te_line]);
+                redistribute(next, cur, parts[p], {step, 0.0, plan.wake_pull * ramp, first});
+            }
             for (std::size_t i = 1; i + 1 < count; ++i) dirs[i] = unit(next[i] - cur[i]);
         }
         for (std::size_t i = 0; i < count; ++i) next[i] = cur[i] + step * dirs[i];

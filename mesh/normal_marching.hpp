@@ -2,11 +2,15 @@
 /// Wall-outward marching of C-grid layers with exact step lengths along every j line.
 ///
 /// Each layer j+1 is reached from layer j by one step of the prescribed length s_j along a
-/// direction per node: the layer normal (central differences), smoothed along i by a dissipation
-/// that grows with s_j / (local i spacing) as in hyperbolic grid generation (Steger & Chaussee
-/// 1980, SIAM J. Sci. Stat. Comput. 1(4), 431-437, where the same dissipation keeps lines from
-/// crossing in concave corners), then bent towards an even i spacing far from the wall. The first
-/// layer follows the wall normal exactly.
+/// direction per node. The direction starts as the layer normal (central differences) and is
+/// smoothed along i by an implicit dissipation that grows with (s_j / local i spacing)^2, as in
+/// hyperbolic grid generation (Steger & Chaussee 1980, SIAM J. Sci. Stat. Comput. 1(4), 431-437
+/// (memory), where dissipation keeps lines from crossing in concave corners). The provisional
+/// layer is then re-spaced along itself: squeezed spacings are shared with their neighbours
+/// (diffusion of log spacing), and far from the wall clusters fan out (more diffusion on the
+/// surface part, a pull of the wake spacing towards the surface spacing at the trailing edge),
+/// no node leaning more than 20 degrees per step. The direction to the re-spaced node, times s_j,
+/// gives the node: the step lengths stay exact. The first layer follows the wall normal exactly.
 #include <vector>
 
 #include "mesh/structured_grid.hpp"
@@ -20,7 +24,10 @@ struct MarchPlan {
     std::vector<double> steps;  ///< s_j, j = 0 .. nj-1 (chords)
     /// How strongly clusters of i lines fan out far from the wall (diffusion of log spacing per
     /// layer at the far field, in nodes squared; grows as (j / nj)^2 from 0 at the wall).
-    double spread = 4.0;
+    double spread = 20.0;
+    /// Fraction per layer (at the far field; (j / nj)^2 from 0 at the wall) by which the wake
+    /// spacing is drawn towards a geometric one matching the surface spacing at the trailing edge.
+    double wake_pull = 0.3;
 };
 
 /// The first cell that came out with non-positive area, if any.
