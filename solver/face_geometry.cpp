@@ -1,5 +1,7 @@
 #include "solver/face_geometry.hpp"
 
+#include <algorithm>
+
 namespace veer {
 
 namespace {
@@ -26,6 +28,12 @@ Vec2 neighbour_centroid(const GridMetrics& m, const Connectivity& c, int i, int 
         shift = shift + c.period_j;
     }
     return m.centroid[m.cell(i, j)] + shift;
+}
+
+/// Weight of the -side cell at a face between centroids x_r - d and x_r, face centre x_f.
+double left_weight(Vec2 x_r, Vec2 d, Vec2 x_f) {
+    const double w = dot(x_r - x_f, d) / dot(d, d);
+    return std::clamp(w, 0.1, 0.9);  // guards degenerate corner cells
 }
 
 void finish_family(FaceFamily& f) {
@@ -75,6 +83,27 @@ FaceGeometry make_face_geometry(const GridMetrics& m, const Connectivity& c,
                     neighbour_centroid(m, c, i, f) - neighbour_centroid(m, c, i, f - 1);
     for (int i : c.wake_cut_i)
         fj_.delta[g.face_j(i, 0)] = m.centroid[m.cell(i, 0)] - m.centroid[m.cell(ni - 1 - i, 0)];
+    // Interpolation weights from the +side centroid (a ghost's where connected).
+    fi_.weight.assign(fi_.area.size(), 0.5);
+    fj_.weight.assign(fj_.area.size(), 0.5);
+    for (int j = 0; j < nj; ++j)
+        for (int f = 0; f <= ni; ++f)
+            if ((f > 0 && f < ni) || c.periodic_i) {
+                const std::size_t k = g.face_i(f, j);
+                fi_.weight[k] =
+                    left_weight(neighbour_centroid(m, c, f, j), fi_.delta[k], m.face_center_i[k]);
+            }
+    for (int f = 0; f <= nj; ++f)
+        for (int i = 0; i < ni; ++i)
+            if ((f > 0 && f < nj) || c.periodic_j) {
+                const std::size_t k = g.face_j(i, f);
+                fj_.weight[k] =
+                    left_weight(neighbour_centroid(m, c, i, f), fj_.delta[k], m.face_center_j[k]);
+            }
+    for (int i : c.wake_cut_i) {
+        const std::size_t k = g.face_j(i, 0);
+        fj_.weight[k] = left_weight(m.centroid[m.cell(i, 0)], fj_.delta[k], m.face_center_j[k]);
+    }
     // Physical faces: the ghost centroid mirrors the interior one through the face midpoint.
     for (const BoundaryFace& b : faces) {
         FaceFamily& fam = b.i_face ? fi_ : fj_;

@@ -22,11 +22,14 @@ namespace veer {
 
 /// One family of faces (all i-faces or all j-faces), metrics layout.
 struct FaceFamily {
-    std::vector<Vec2> area;                        ///< area vector towards +i / +j (chords)
-    std::vector<Vec2> delta;                       ///< x_R - x_L (chords)
-    std::vector<double> ortho;                     ///< |A|^2 / (A . delta) (dimensionless)
-    std::vector<Vec2> skew;                        ///< A - ortho delta (chords)
-    std::vector<Vec2> center;                      ///< face midpoint (chords)
+    std::vector<Vec2> area;     ///< area vector towards +i / +j (chords)
+    std::vector<Vec2> delta;    ///< x_R - x_L (chords)
+    std::vector<double> ortho;  ///< |A|^2 / (A . delta) (dimensionless)
+    std::vector<Vec2> skew;     ///< A - ortho delta (chords)
+    std::vector<Vec2> center;   ///< face midpoint (chords)
+    /// Interpolation weight of the -i/-j cell, q_f = w q_L + (1 - w) q_R, from the projections
+    /// of the centroids on delta (exact for linear q along delta on stretched grids).
+    std::vector<double> weight;
     std::vector<std::uint8_t> physical;            ///< 1 on physical boundary faces
     std::vector<std::uint8_t> velocity_dirichlet;  ///< 1 where the velocity is prescribed
 };
