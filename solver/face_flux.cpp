@@ -12,9 +12,7 @@ void predicted_face_flux(const FaceGeometry& g, CellView u, CellView v, CellView
     for_each_cell({0, g.ni + 1, 0, g.nj}, [&](int f, int j) {
         const std::size_t k = g.face_i(f, j);
         const Vec2 a = fi.area[k], d = fi.delta[k];
-        const double w = 0.5;
-        double flux = a.x * (w * u(f - 1, j) + (1.0 - w) * u(f, j)) +
-                      a.y * (w * v(f - 1, j) + (1.0 - w) * v(f, j));
+        double flux = 0.5 * (a.x * (u(f - 1, j) + u(f, j)) + a.y * (v(f - 1, j) + v(f, j)));
         if (!fi.physical[k]) {
             const double third =
                 (p(f, j) - p(f - 1, j)) -
@@ -27,9 +25,7 @@ void predicted_face_flux(const FaceGeometry& g, CellView u, CellView v, CellView
     for_each_cell({0, g.ni, 0, g.nj + 1}, [&](int i, int f) {
         const std::size_t k = g.face_j(i, f);
         const Vec2 a = fj.area[k], d = fj.delta[k];
-        const double w = 0.5;
-        double flux = a.x * (w * u(i, f - 1) + (1.0 - w) * u(i, f)) +
-                      a.y * (w * v(i, f - 1) + (1.0 - w) * v(i, f));
+        double flux = 0.5 * (a.x * (u(i, f - 1) + u(i, f)) + a.y * (v(i, f - 1) + v(i, f)));
         if (!fj.physical[k]) {
             const double third =
                 (p(i, f) - p(i, f - 1)) -

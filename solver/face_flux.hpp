@@ -6,10 +6,11 @@
 /// depend on the time step or on relaxation (the dependence and its remedy: Majumdar 1988,
 /// Numer. Heat Transfer 13, 125-132; Choi 1999, Numer. Heat Transfer A 36, 545-550 (memory)):
 ///
-///   F*_f = A . (w u*_L + (1 - w) u*_R) - D_f ortho_f [ (p_R - p_L) - delta_f . avg(grad p) ]
+///   F*_f = A . avg(u*) - D_f ortho_f [ (p_R - p_L) - delta_f . avg(grad p) ]
 ///
-/// (w: face_geometry.hpp; w = 1/2 on physical faces). The bracket is a third difference of p (zero
-/// for linear p), and the non-orthogonal parts of the face gradient and of the interpolated
+/// with plain averages (distance weights here stalled the steady convergence on C-grids; the
+/// cell gradients use them, gradients.hpp). The bracket is a third difference of p (zero for
+/// linear p), and the non-orthogonal parts of the face gradient and of the interpolated
 /// gradient cancel exactly (face_geometry.hpp). On physical faces F* = A . avg(u*), i.e. A . u_b
 /// where the velocity is prescribed and A . u*_P where it has zero gradient (the ghosts carry the
 /// condition).
