@@ -16,6 +16,33 @@ void add_case_options(CLI::App& sub, CaseOptions& o) {
         ->type_name("TABLE.KEY=VALUE");
 }
 
+CLI::App* add_sweep_subcommand(CLI::App& app, SweepOptions& o) {
+    CLI::App* sweep = app.add_subcommand("sweep", "solve a case over a range of angles of attack");
+    add_case_options(*sweep, o.input);
+    sweep->add_option("--alpha", o.alpha, "angles in degrees: START:END:STEP or a,b,c")
+        ->required()
+        ->type_name("ANGLES");
+    sweep->add_option("-o,--output", o.out_dir, "sweep folder (one run folder per point)")
+        ->required();
+    sweep->add_flag("--down", o.down, "run from the highest angle down (hysteresis)");
+    sweep
+        ->add_option("--point-index", o.point_index,
+                     "run only point K (0-based, in run order; for job arrays)")
+        ->check(CLI::NonNegativeNumber);
+    sweep->add_flag("--gather", o.gather, "only gather the finished points into the polar");
+    sweep
+        ->add_option("--steady-steps", o.steady_steps,
+                     "iteration cap of each steady attempt before it goes time-accurate")
+        ->check(CLI::PositiveNumber);
+    sweep
+        ->add_option("--unsteady-time", o.unsteady_time,
+                     "end time (chords / free-stream speed) of time-accurate points")
+        ->check(CLI::PositiveNumber);
+    sweep->add_flag("--force", o.force, "write into a folder that holds another study");
+    sweep->add_flag("-q,--quiet", o.quiet, "no live progress line");
+    return sweep;
+}
+
 }  // namespace
 
 int run_cli(int argc, char** argv) {
@@ -47,6 +74,14 @@ int run_cli(int argc, char** argv) {
     run->add_flag("--force", run_opts.force, "write into a folder that holds another study");
     run->add_flag("-q,--quiet", run_opts.quiet, "no live progress line");
 
+    SweepOptions sweep_opts;
+    CLI::App* sweep = add_sweep_subcommand(app, sweep_opts);
+    ReportOptions report_opts;
+    CLI::App* report = app.add_subcommand("report", "write DIR/report.html with pictures");
+    report->add_option("dir", report_opts.dir, "a run folder or a sweep folder")
+        ->required()
+        ->check(CLI::ExistingDirectory);
+
     try {
         app.parse(argc, argv);
     } catch (const CLI::ParseError& e) {
@@ -55,6 +90,8 @@ int run_cli(int argc, char** argv) {
     try {
         if (*check) return run_check_command(check_opts);
         if (*mesh) return run_mesh_command(mesh_opts);
+        if (*sweep) return run_sweep_command(sweep_opts);
+        if (*report) return run_report_command(report_opts);
         if (*run) {
             if (run_opts.input.case_file.empty() && run_opts.restart.empty())
                 throw InputError("veer run: give a case file, or --restart CHECKPOINT");

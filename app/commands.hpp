@@ -27,8 +27,29 @@ struct RunOptions {
     bool quiet = false;
 };
 
+/// `veer sweep`: an angle-of-attack sweep and its polar (app/SWEEPS.md).
+struct SweepOptions {
+    CaseOptions input;
+    std::string alpha;  ///< START:END:STEP or a,b,c (degrees)
+    bool down = false;  ///< run from the highest angle down
+    std::filesystem::path out_dir;
+    bool force = false;
+    bool quiet = false;
+    long point_index = -1;     ///< >= 0: run only this point (0-based, job arrays)
+    bool gather = false;       ///< only gather finished points into the polar
+    long steady_steps = 0;     ///< > 0: step cap of each steady attempt
+    double unsteady_time = 0;  ///< > 0: end time of time-accurate points
+};
+
+/// `veer report`: DIR/report.html with pictures, for a run folder or a sweep folder.
+struct ReportOptions {
+    std::filesystem::path dir;
+};
+
 int run_mesh_command(const MeshOptions& options);
 int run_check_command(const CaseOptions& options);
 int run_run_command(const RunOptions& options);
+int run_sweep_command(const SweepOptions& options);
+int run_report_command(const ReportOptions& options);
 
 }  // namespace veer

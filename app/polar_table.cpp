@@ -1,0 +1,104 @@
+#include "app/polar_table.hpp"
+
+#include <fmt/format.h>
+
+#include <algorithm>
+#include <cmath>
+#include <numbers>
+#include <sstream>
+
+#include "io/atomic_file.hpp"
+#include "io/json_writer.hpp"
+
+namespace veer {
+namespace {
+
+std::string cell(const std::optional<double>& v) {
+    return v && std::isfinite(*v) ? fmt::format("{:.8g}", *v) : std::string();
+}
+
+std::string cell(double v) { return cell(std::optional<double>(v)); }
+
+nlohmann::json value_or_null(const std::optional<double>& v) {
+    return v ? nlohmann::json(*v) : nlohmann::json(nullptr);
+}
+
+std::string polar_text(const std::vector<PointRecord>& points) {
+    std::ostringstream out;
+    const auto& columns = polar_columns();
+    for (std::size_t c = 0; c < columns.size(); ++c) out << (c ? "," : "") << columns[c];
+    out << "\n";
+    for (const PointRecord& r : points) {
+        out << fmt::format("{:g},{},{},{},{},{},{},{},{},{},{},{}\n", r.alpha, cell(r.cl),
+                           cell(r.cd), cell(r.cm), cell(r.cl_momentum), cell(r.separation_upper),
+                           cell(r.reattachment_upper), cell(r.separation_lower),
+                           cell(r.reattachment_lower), r.regime, cell(r.strouhal),
+                           cell(r.cl_amplitude));
+    }
+    return out.str();
+}
+
+nlohmann::json summary_json(const std::vector<PointRecord>& points,
+                            const std::vector<double>& missing) {
+    const PolarFigures f = polar_figures(points);
+    nlohmann::json s = {
+        {"points", points.size()},
+        {"missing_points", missing},
+        {"lift_slope_per_deg", f.linear ? nlohmann::json(f.linear->slope_per_deg) : nullptr},
+        {"lift_slope_per_rad",
+         f.linear ? nlohmann::json(f.linear->slope_per_deg * 180.0 / std::numbers::pi) : nullptr},
+        {"alpha_zero_lift", value_or_null(f.alpha_zero_lift)},
+        {"cl_max", value_or_null(f.cl_max)},
+        {"alpha_cl_max", value_or_null(f.alpha_cl_max)},
+        {"stall_in_range", f.stall_in_range},
+        {"alpha_separation_onset", value_or_null(f.alpha_separation_onset)},
+        {"cd_min", value_or_null(f.cd_min)},
+        {"alpha_cd_min", value_or_null(f.alpha_cd_min)},
+        {"max_lift_disagreement", value_or_null(f.max_lift_disagreement)},
+    };
+    if (f.linear)
+        s["linear_range"] = {{"alpha_min", f.linear->alpha_min},
+                             {"alpha_max", f.linear->alpha_max},
+                             {"points", f.linear->points}};
+    else
+        s["linear_range"] = nullptr;
+    int unsteady = 0, failed = 0;
+    double wall = 0.0;
+    for (const PointRecord& r : points) {
+        unsteady += r.regime == "unsteady";
+        failed += r.regime == "failed";
+        wall += r.wall_seconds;
+    }
+    s["unsteady_points"] = unsteady;
+    s["failed_points"] = failed;
+    s["wall_seconds_points"] = wall;
+    return s;
+}
+
+}  // namespace
+
+const std::vector<const char*>& polar_columns() {
+    static const std::vector<const char*> columns = {"alpha",
+                                                     "cl",
+                                                     "cd",
+                                                     "cm",
+                                                     "cl_momentum",
+                                                     "separation_upper",
+                                                     "reattachment_upper",
+                                                     "separation_lower",
+                                                     "reattachment_lower",
+                                                     "regime",
+                                                     "strouhal",
+                                                     "cl_amplitude"};
+    return columns;
+}
+
+void write_polar_files(const std::filesystem::path& dir, std::vector<PointRecord> points,
+                       const std::vector<double>& missing) {
+    std::sort(points.begin(), points.end(),
+              [](const auto& a, const auto& b) { return a.alpha < b.alpha; });
+    write_text_atomically(dir / "polar.csv", polar_text(points));
+    write_json_file(dir / "summary.json", summary_json(points, missing));
+}
+
+}  // namespace veer

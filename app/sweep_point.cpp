@@ -1,0 +1,247 @@
+#include "app/sweep_point.hpp"
+
+#include <fmt/format.h>
+
+#include <cmath>
+
+#include "app/report_csv.hpp"
+#include "app/run_report.hpp"
+#include "app/simulation.hpp"
+#include "app/sweep_angles.hpp"
+#include "app/sweep_unsteady_stats.hpp"
+#include "io/case_file.hpp"
+#include "io/checkpoint.hpp"
+#include "io/json_writer.hpp"
+#include "io/output_dir.hpp"
+#include "mesh/errors.hpp"
+#include "postprocess/separation.hpp"
+
+namespace veer {
+namespace {
+namespace fs = std::filesystem;
+
+constexpr double trailing_edge_zone = 0.95;  // x/c aft of which a separation is the TE's own
+
+const char* status_word(RunStatus s) {
+    switch (s) {
+        case RunStatus::converged:
+            return "converged";
+        case RunStatus::step_cap:
+            return "step cap";
+        case RunStatus::end_time:
+            return "end time";
+        case RunStatus::interrupted:
+            return "interrupted";
+        case RunStatus::diverged:
+            return "diverged";
+    }
+    return "?";
+}
+
+/// Separation figures of the final fields (the last instant for time-accurate points).
+void add_separation(PointRecord& r, const Simulation& sim) {
+    if (!sim.grid().c_layout()) return;
+    const SurfaceDistribution d =
+        surface_distribution(sim.grid(), sim.metrics(), sim.solver().fields(), sim.spec().flow);
+    const SeparationReport s = find_separation(d);
+    auto first_x = [](const std::vector<SurfaceLocation>& v) {
+        return v.empty() ? std::nullopt : std::optional<double>(v.front().x);
+    };
+    r.separation_upper = first_x(s.upper.separations);
+    r.reattachment_upper = first_x(s.upper.reattachments);
+    r.separation_lower = first_x(s.lower.separations);
+    r.reattachment_lower = first_x(s.lower.reattachments);
+    if (s.upper.trailing_edge_separation)
+        r.trailing_edge_separation_upper = s.upper.trailing_edge_separation->x;
+    for (const SeparationBubble& b : s.upper.bubbles)
+        if (b.start.x < trailing_edge_zone) r.upper_bubble = true;
+}
+
+/// Control-volume lift on the largest contour, from the run's summary.json (when it has it).
+std::optional<double> momentum_lift(const fs::path& run_dir) {
+    const nlohmann::json s = read_json_file(run_dir / "summary.json");
+    if (!s.contains("cl_momentum")) return std::nullopt;
+    const nlohmann::json& m = s["cl_momentum"];
+    if (m.is_number()) return m.get<double>();
+    if (!m.is_object()) return std::nullopt;
+    std::optional<double> best;
+    double largest = -1.0;
+    for (const auto& [key, value] : m.items()) {
+        const double distance = std::strtod(key.c_str(), nullptr);
+        if (value.is_number() && distance > largest) {
+            largest = distance;
+            best = value.get<double>();
+        }
+    }
+    return best;
+}
+
+ForceRecord read_force_record(const fs::path& history) {
+    const CsvTable t = CsvTable::read(history);
+    return {t.numbers("time"), t.numbers("cl"), t.numbers("cd"), t.numbers("cm")};
+}
+
+struct RunPiece {
+    RunResult result;
+    std::unique_ptr<Simulation> sim;
+};
+
+RunPiece run_piece(const CaseSpec& spec, const StructuredGrid& grid, const fs::path& dir,
+                   const FlowFields* start, const SweepCase& sweep, const std::string& label) {
+    prepare_output_dir(dir, spec.text, false);
+    SimulationOptions options;
+    options.progress = sweep.progress;
+    options.label = label;
+    RunPiece p;
+    p.sim = std::make_unique<Simulation>(spec, grid, dir, options);
+    if (start) p.sim->start_from(*start);
+    p.result = p.sim->run();
+    if (p.result.status != RunStatus::diverged && p.result.status != RunStatus::interrupted)
+        write_run_report(*p.sim, p.result);
+    return p;
+}
+
+/// Time-accurate continuation of a point that did not settle.
+void continue_unsteady(PointRecord& r, PointOutcome& out, const SweepCase& sweep, double alpha,
+                       const StructuredGrid& grid, const fs::path& dir, const Simulation& steady,
+                       const std::string& label) {
+    // The steady attempt's step cap does not apply: the case's own cap and end time do.
+    std::vector<std::string> o = sweep.overrides;
+    o.push_back(fmt::format("flow.alpha={:.17g}", alpha));
+    o.push_back("run.mode=\"unsteady\"");
+    if (sweep.unsteady_time > 0)
+        o.push_back(fmt::format("run.end_time={:.17g}", sweep.unsteady_time));
+    const CaseSpec spec = read_case_file(sweep.case_file, o);
+    const FlowFields from = steady.solver().fields();
+    RunPiece p = run_piece(spec, grid, dir / "unsteady", &from, sweep, label + "unsteady ");
+    r.iterations += p.result.steps;
+    r.wall_seconds += p.result.wall_seconds;
+    r.status = status_word(p.result.status);
+    if (p.result.status == RunStatus::interrupted) {
+        out.interrupted = true;
+        return;
+    }
+    if (p.result.status == RunStatus::step_cap)
+        r.note += "; the time-accurate run reached the step cap before its end time";
+    if (p.result.status == RunStatus::diverged) {
+        r.regime = "failed";
+        r.note += "; the time-accurate run diverged: " + p.result.diagnosis;
+        return;
+    }
+    r.final_run = "unsteady";
+    r.regime = "unsteady";
+    const ForceRecord history = read_force_record(dir / "unsteady" / "history.csv");
+    if (history.time.size() >= 4) {
+        const UnsteadyStats st = unsteady_stats(history);
+        r.cl = st.cl_mean, r.cd = st.cd_mean, r.cm = st.cm_mean;
+        r.cl_amplitude = st.cl_amplitude, r.cd_amplitude = st.cd_amplitude;
+        r.cm_amplitude = st.cm_amplitude;
+        r.cycles = st.cycles;
+        r.strouhal = st.strouhal;
+        if (!st.periodic) {
+            r.regime = "steady";
+            r.note +=
+                "; the time-accurate run settled without whole cycles (averaged over the "
+                "second half of its record)";
+        }
+    }
+    r.cl_momentum = momentum_lift(dir / "unsteady");
+    add_separation(r, *p.sim);
+    out.fields = p.sim->solver().fields();
+}
+
+}  // namespace
+
+std::vector<std::string> point_overrides(const SweepCase& sweep, double alpha) {
+    std::vector<std::string> o = sweep.overrides;
+    o.push_back(fmt::format("flow.alpha={:.17g}", alpha));
+    if (sweep.steady_steps > 0) o.push_back(fmt::format("run.steps={}", sweep.steady_steps));
+    return o;
+}
+
+std::string point_case_text(const SweepCase& sweep, double alpha) {
+    return read_case_file(sweep.case_file, point_overrides(sweep, alpha)).text;
+}
+
+PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const StructuredGrid& grid,
+                             const fs::path& sweep_dir, const FlowFields* start,
+                             const std::string& label) {
+    const CaseSpec spec = read_case_file(sweep.case_file, point_overrides(sweep, alpha));
+    PointRecord r;
+    r.alpha = alpha;
+    r.folder = point_folder_name(alpha);
+    r.case_text = spec.text;
+    const fs::path dir = sweep_dir / r.folder;
+    PointOutcome out;
+    RunPiece p = run_piece(spec, grid, dir, start, sweep, label);
+    r.iterations = p.result.steps;
+    r.wall_seconds = p.result.wall_seconds;
+    r.status = status_word(p.result.status);
+    const bool steady_mode = spec.run.mode == "steady";
+    switch (p.result.status) {
+        case RunStatus::interrupted:
+            out.interrupted = true;
+            return out;
+        case RunStatus::diverged:
+            r.regime = "failed";
+            r.note = p.result.diagnosis;
+            write_json_file(record_path(dir), record_to_json(r));
+            out.record = r;
+            return out;
+        case RunStatus::step_cap:
+            if (steady_mode) {
+                r.note = fmt::format("the steady iteration did not settle in {} iterations",
+                                     spec.run.steps);
+                continue_unsteady(r, out, sweep, alpha, grid, dir, *p.sim, label);
+                if (out.interrupted) return out;
+                break;
+            }
+            [[fallthrough]];
+        default:
+            r.cl = p.result.forces.cl.total;
+            r.cd = p.result.forces.cd.total;
+            r.cm = p.result.forces.cm.total;
+            r.cl_momentum = momentum_lift(dir);
+            add_separation(r, *p.sim);
+            out.fields = p.sim->solver().fields();
+            if (!steady_mode) {
+                // A time-accurate case: every point is averaged like an unsteady one.
+                const ForceRecord history = read_force_record(dir / "history.csv");
+                if (history.time.size() >= 4) {
+                    const UnsteadyStats st = unsteady_stats(history);
+                    r.regime = st.periodic ? "unsteady" : "steady";
+                    r.cl = st.cl_mean, r.cd = st.cd_mean, r.cm = st.cm_mean;
+                    r.cl_amplitude = st.cl_amplitude, r.cd_amplitude = st.cd_amplitude;
+                    r.cm_amplitude = st.cm_amplitude;
+                    r.cycles = st.cycles;
+                    r.strouhal = st.strouhal;
+                }
+            }
+            break;
+    }
+    write_json_file(record_path(dir), record_to_json(r));
+    out.record = r;
+    return out;
+}
+
+std::optional<FlowFields> finished_point_fields(const fs::path& point_dir,
+                                                const PointRecord& record,
+                                                const StructuredGrid& grid) {
+    try {
+        const fs::path run_dir = point_dir / record.final_run;
+        const CheckpointData c = read_checkpoint(run_dir / "checkpoint.h5");
+        if (c.grid.ni() != grid.ni() || c.grid.nj() != grid.nj()) return std::nullopt;
+        const CaseSpec spec = parse_case_text(c.case_text, (run_dir / "checkpoint.h5").string(),
+                                              run_dir, {}, FileCheck::skip);
+        FlowSolver solver(grid, spec.flow, solver_settings_for(spec));
+        std::vector<NamedArray> state;
+        for (const NamedArray& a : c.arrays)
+            if (a.name != "simulation_convergence") state.push_back(a);
+        solver.restore(state);
+        return solver.fields();
+    } catch (const std::exception&) {
+        return std::nullopt;  // the next point starts from the free stream instead
+    }
+}
+
+}  // namespace veer

@@ -1,0 +1,108 @@
+#include "app/sweep_record.hpp"
+
+#include <cmath>
+
+#include "io/json_writer.hpp"
+#include "mesh/errors.hpp"
+
+namespace veer {
+namespace {
+
+nlohmann::json optional_value(const std::optional<double>& v) {
+    return v ? nlohmann::json(*v) : nlohmann::json(nullptr);
+}
+
+std::optional<double> read_optional(const nlohmann::json& j, const char* key) {
+    if (!j.contains(key) || j[key].is_null()) return std::nullopt;
+    return j[key].get<double>();
+}
+
+}  // namespace
+
+nlohmann::json record_to_json(const PointRecord& r) {
+    return {
+        {"alpha", r.alpha},
+        {"folder", r.folder},
+        {"final_run", r.final_run},
+        {"regime", r.regime},
+        {"status", r.status},
+        {"note", r.note},
+        {"cl", r.cl},
+        {"cd", r.cd},
+        {"cm", r.cm},
+        {"cl_momentum", optional_value(r.cl_momentum)},
+        {"separation_upper", optional_value(r.separation_upper)},
+        {"reattachment_upper", optional_value(r.reattachment_upper)},
+        {"separation_lower", optional_value(r.separation_lower)},
+        {"reattachment_lower", optional_value(r.reattachment_lower)},
+        {"trailing_edge_separation_upper", optional_value(r.trailing_edge_separation_upper)},
+        {"upper_bubble", r.upper_bubble},
+        {"strouhal", optional_value(r.strouhal)},
+        {"cl_amplitude", r.cl_amplitude},
+        {"cd_amplitude", r.cd_amplitude},
+        {"cm_amplitude", r.cm_amplitude},
+        {"cycles", r.cycles},
+        {"iterations", r.iterations},
+        {"wall_seconds", r.wall_seconds},
+        {"case_text", r.case_text},
+    };
+}
+
+PointRecord record_from_json(const nlohmann::json& j, const std::string& source) {
+    try {
+        PointRecord r;
+        r.alpha = j.at("alpha").get<double>();
+        r.folder = j.at("folder").get<std::string>();
+        r.final_run = j.at("final_run").get<std::string>();
+        r.regime = j.at("regime").get<std::string>();
+        r.status = j.at("status").get<std::string>();
+        r.note = j.value("note", std::string());
+        // JSON has no NaN: a coefficient written as null (non-finite) reads back as NaN.
+        auto number = [&](const char* key) {
+            return j.at(key).is_null() ? std::nan("") : j.at(key).get<double>();
+        };
+        r.cl = number("cl");
+        r.cd = number("cd");
+        r.cm = number("cm");
+        r.cl_momentum = read_optional(j, "cl_momentum");
+        r.separation_upper = read_optional(j, "separation_upper");
+        r.reattachment_upper = read_optional(j, "reattachment_upper");
+        r.separation_lower = read_optional(j, "separation_lower");
+        r.reattachment_lower = read_optional(j, "reattachment_lower");
+        r.trailing_edge_separation_upper = read_optional(j, "trailing_edge_separation_upper");
+        r.upper_bubble = j.value("upper_bubble", false);
+        r.strouhal = read_optional(j, "strouhal");
+        r.cl_amplitude = number("cl_amplitude");
+        r.cd_amplitude = number("cd_amplitude");
+        r.cm_amplitude = number("cm_amplitude");
+        r.cycles = j.value("cycles", 0);
+        r.iterations = j.value("iterations", 0L);
+        r.wall_seconds = j.value("wall_seconds", 0.0);
+        r.case_text = j.at("case_text").get<std::string>();
+        return r;
+    } catch (const nlohmann::json::exception& e) {
+        throw InputError(source + ": not a sweep point record (" + e.what() + ")");
+    }
+}
+
+std::filesystem::path record_path(const std::filesystem::path& point_dir) {
+    return point_dir / "sweep_point.json";
+}
+
+std::optional<PointRecord> finished_point(const std::filesystem::path& point_dir,
+                                          const std::string& case_text) {
+    std::error_code ec;
+    if (!std::filesystem::exists(point_dir / "summary.json", ec) ||
+        !std::filesystem::exists(record_path(point_dir), ec))
+        return std::nullopt;
+    try {
+        PointRecord r = record_from_json(read_json_file(record_path(point_dir)),
+                                         record_path(point_dir).string());
+        if (r.case_text != case_text) return std::nullopt;
+        return r;
+    } catch (const InputError&) {
+        return std::nullopt;  // a damaged record: the point is run again
+    }
+}
+
+}  // namespace veer

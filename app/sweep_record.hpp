@@ -1,0 +1,48 @@
+#pragma once
+/// What the sweep keeps of one point: DIR/alpha_+04.00/sweep_point.json. The polar is built from
+/// these records only, so a sweep can be gathered again from its folders (after an interrupted
+/// run, after job-array points, after an MPI run).
+#include <filesystem>
+#include <nlohmann/json.hpp>
+#include <optional>
+#include <string>
+
+namespace veer {
+
+/// One point of a sweep as the polar sees it. Coefficients are time averages over whole cycles
+/// for unsteady points, the converged values for steady ones.
+struct PointRecord {
+    double alpha = 0.0;           ///< degrees
+    std::string folder;           ///< relative to the sweep folder, e.g. "alpha_+04.00"
+    std::string final_run = ".";  ///< the run whose outputs describe the point, relative to folder
+    std::string regime = "steady";  ///< "steady", "unsteady" or "failed"
+    std::string status;             ///< how the final run ended (converged, end time, ...)
+    std::string note;               ///< why the point went time-accurate, or failed
+    double cl = 0.0, cd = 0.0, cm = 0.0;
+    std::optional<double> cl_momentum;  ///< control-volume lift on the largest contour
+    std::optional<double> separation_upper, reattachment_upper;  ///< x/c, first ones from the LE
+    std::optional<double> separation_lower, reattachment_lower;
+    /// Upper surface: where the flow leaves the wall for good (no reattachment aft), x/c.
+    std::optional<double> trailing_edge_separation_upper;
+    bool upper_bubble = false;       ///< a closed separation bubble on the upper surface
+    std::optional<double> strouhal;  ///< f c / U_inf of the lift (unsteady points)
+    double cl_amplitude = 0.0, cd_amplitude = 0.0, cm_amplitude = 0.0;  ///< half peak-to-peak
+    int cycles = 0;       ///< whole cycles averaged over
+    long iterations = 0;  ///< steps of the steady attempt plus the time-accurate run
+    double wall_seconds = 0.0;
+    std::string case_text;  ///< the steady point's case text: same text, same point
+};
+
+nlohmann::json record_to_json(const PointRecord& r);
+/// Throws InputError naming `source` when a key is missing or of the wrong type.
+PointRecord record_from_json(const nlohmann::json& j, const std::string& source);
+
+/// The record file of a point folder.
+std::filesystem::path record_path(const std::filesystem::path& point_dir);
+
+/// The record of a finished point: its folder holds summary.json and a record of the same case
+/// text; nullopt otherwise (missing, unreadable or another case).
+std::optional<PointRecord> finished_point(const std::filesystem::path& point_dir,
+                                          const std::string& case_text);
+
+}  // namespace veer

@@ -1,0 +1,165 @@
+#include "io/plot_chart.hpp"
+
+#include <algorithm>
+#include <cmath>
+#include <limits>
+
+#include "io/plot_ticks.hpp"
+
+namespace veer {
+namespace {
+
+constexpr Colour ink{0.15, 0.15, 0.15};
+constexpr Colour grid_ink{0.88, 0.88, 0.88};
+constexpr Colour mark_ink{0.55, 0.10, 0.10};
+
+struct Frame {
+    double left, top, width, height;  // plot area in pixels
+    AxisTicks x, y;
+    bool log_y, reversed;
+    double px(double v) const { return left + (v - x.lo) / (x.hi - x.lo) * width; }
+    double py(double v) const {
+        const double f =
+            log_y ? (std::log10(v) - std::log10(y.lo)) / (std::log10(y.hi) - std::log10(y.lo))
+                  : (v - y.lo) / (y.hi - y.lo);
+        return reversed ? top + f * height : top + (1 - f) * height;
+    }
+};
+
+void data_range(const Chart& c, bool along_x, double& lo, double& hi) {
+    lo = std::numeric_limits<double>::infinity();
+    hi = -lo;
+    for (const ChartSeries& s : c.series)
+        for (std::size_t k = 0; k < s.x.size() && k < s.y.size(); ++k) {
+            const double v = along_x ? s.x[k] : s.y[k];
+            if (!std::isfinite(s.x[k]) || !std::isfinite(s.y[k])) continue;
+            if (!along_x && c.y_scale == AxisScale::logarithmic && v <= 0) continue;
+            lo = std::min(lo, v), hi = std::max(hi, v);
+        }
+    if (along_x)
+        for (const ChartMark& m : c.marks) lo = std::min(lo, m.x), hi = std::max(hi, m.x);
+}
+
+Frame make_frame(const Chart& c, int width, int height) {
+    Frame f{};
+    f.left = 72, f.top = c.title.empty() ? 24 : 44;
+    f.width = width - f.left - 24, f.height = height - f.top - 56;
+    double x0, x1, y0, y1;
+    data_range(c, true, x0, x1);
+    data_range(c, false, y0, y1);
+    f.log_y = c.y_scale == AxisScale::logarithmic;
+    f.reversed = c.y_reversed;
+    if (c.equal_aspect && std::isfinite(x0) && std::isfinite(y0)) {
+        // Widen the shorter extent so one unit spans the same pixels both ways.
+        const double per_px = std::max((x1 - x0) / f.width, (y1 - y0) / f.height) * 1.1;
+        const double xc = 0.5 * (x0 + x1), yc = 0.5 * (y0 + y1);
+        x0 = xc - 0.5 * per_px * f.width, x1 = xc + 0.5 * per_px * f.width;
+        y0 = yc - 0.5 * per_px * f.height, y1 = yc + 0.5 * per_px * f.height;
+    }
+    f.x = nice_ticks(x0, x1);
+    f.y = f.log_y ? decade_ticks(y0, y1) : nice_ticks(y0, y1);
+    if (c.equal_aspect) {
+        f.x.lo = x0, f.x.hi = x1, f.y.lo = y0, f.y.hi = y1;
+        auto inside = [](AxisTicks& t) {
+            std::erase_if(t.values, [&](double v) { return v < t.lo || v > t.hi; });
+        };
+        inside(f.x), inside(f.y);
+    }
+    return f;
+}
+
+void draw_axes(Canvas& cv, const Chart& c, const Frame& f) {
+    for (double v : f.x.values) {
+        cv.line(f.px(v), f.top, f.px(v), f.top + f.height, grid_ink);
+        cv.text(tick_label(v, f.x.step), f.px(v), f.top + f.height + 16, 11, TextAnchor::centre,
+                ink);
+    }
+    for (double v : f.y.values) {
+        cv.line(f.left, f.py(v), f.left + f.width, f.py(v), grid_ink);
+        const std::string label = f.log_y ? tick_label(v, v) : tick_label(v, f.y.step);
+        cv.text(label, f.left - 6, f.py(v) + 4, 11, TextAnchor::right, ink);
+    }
+    cv.rectangle(f.left, f.top, f.width, f.height, ink);
+    cv.text(c.x_label, f.left + 0.5 * f.width, f.top + f.height + 40, 13, TextAnchor::centre, ink);
+    cv.text(c.y_label, 18, f.top + 0.5 * f.height, 13, TextAnchor::centre, ink, true);
+    if (!c.title.empty())
+        cv.text(c.title, f.left + 0.5 * f.width, 26, 15, TextAnchor::centre, ink, false, true);
+}
+
+void draw_series(Canvas& cv, const ChartSeries& s, Colour col, const Frame& f) {
+    cairo_t* cr = cv.context();
+    cairo_save(cr);
+    cairo_rectangle(cr, f.left, f.top, f.width, f.height);
+    cairo_clip(cr);
+    auto ok = [&](std::size_t k) {
+        return std::isfinite(s.x[k]) && std::isfinite(s.y[k]) && (!f.log_y || s.y[k] > 0);
+    };
+    const std::size_t n = std::min(s.x.size(), s.y.size());
+    if (s.line) {
+        const double dash[] = {6.0, 4.0};
+        cairo_set_dash(cr, dash, s.dashed ? 2 : 0, 0.0);
+        cairo_set_source_rgb(cr, col.r, col.g, col.b);
+        cairo_set_line_width(cr, 1.8);
+        cairo_set_line_join(cr, CAIRO_LINE_JOIN_ROUND);
+        bool pen_down = false;
+        for (std::size_t k = 0; k < n; ++k) {
+            if (!ok(k)) {
+                pen_down = false;
+                continue;
+            }
+            if (pen_down)
+                cairo_line_to(cr, f.px(s.x[k]), f.py(s.y[k]));
+            else
+                cairo_move_to(cr, f.px(s.x[k]), f.py(s.y[k]));
+            pen_down = true;
+        }
+        cairo_stroke(cr);
+        cairo_set_dash(cr, dash, 0, 0.0);
+    }
+    if (s.markers)
+        for (std::size_t k = 0; k < n; ++k)
+            if (ok(k)) cv.marker(f.px(s.x[k]), f.py(s.y[k]), col);
+    cairo_restore(cr);
+}
+
+void draw_legend(Canvas& cv, const Chart& c, const Frame& f) {
+    double widest = 0;
+    int entries = 0;
+    for (const ChartSeries& s : c.series)
+        if (!s.label.empty()) widest = std::max(widest, cv.text_width(s.label, 11)), ++entries;
+    if (entries == 0) return;
+    const double w = widest + 44, h = 18.0 * entries + 8;
+    const double x = f.left + f.width - w - 8, y = f.top + 8;
+    cv.fill_rectangle(x, y, w, h, {1, 1, 1});
+    cv.rectangle(x, y, w, h, grid_ink);
+    int row = 0;
+    for (std::size_t k = 0; k < c.series.size(); ++k) {
+        const ChartSeries& s = c.series[k];
+        if (s.label.empty()) continue;
+        const Colour col = series_colour(s.colour >= 0 ? s.colour : static_cast<int>(k));
+        const double yy = y + 14 + 18.0 * row++;
+        if (s.line) cv.line(x + 6, yy - 4, x + 30, yy - 4, col, 1.8, s.dashed);
+        if (s.markers) cv.marker(x + 18, yy - 4, col);
+        cv.text(s.label, x + 36, yy, 11, TextAnchor::left, ink);
+    }
+}
+
+}  // namespace
+
+void write_chart(const Chart& chart, const std::filesystem::path& path, int width, int height) {
+    Canvas cv(path, width, height);
+    const Frame f = make_frame(chart, width, height);
+    draw_axes(cv, chart, f);
+    for (const ChartMark& m : chart.marks) {
+        cv.line(f.px(m.x), f.top, f.px(m.x), f.top + f.height, mark_ink, 1.2, true);
+        cv.text(m.label, f.px(m.x) + 4, f.top + 14, 11, TextAnchor::left, mark_ink);
+    }
+    for (std::size_t k = 0; k < chart.series.size(); ++k) {
+        const ChartSeries& s = chart.series[k];
+        draw_series(cv, s, series_colour(s.colour >= 0 ? s.colour : static_cast<int>(k)), f);
+    }
+    draw_legend(cv, chart, f);
+    cv.finish();
+}
+
+}  // namespace veer
