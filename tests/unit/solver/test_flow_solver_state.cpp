@@ -1,0 +1,148 @@
+/// FlowSolver as a Model: restarts from state() continue bit for bit, results repeat run to run,
+/// and a diverging run says where.
+#include <gtest/gtest.h>
+
+#include <cmath>
+#include <limits>
+
+#include "mesh/structured_grid.hpp"
+#include "solver/flow_solver.hpp"
+
+namespace veer {
+namespace {
+
+/// Lid-driven cavity, 16 x 16 (small: these tests check bits, not physics).
+StructuredGrid cavity() {
+    StructuredGrid g(16, 16);
+    for (int j = 0; j <= 16; ++j)
+        for (int i = 0; i <= 16; ++i) g.node(i, j) = {i / 16.0, j / 16.0};
+    g.segments() = {{Side::i_min, 0, 16, SegmentKind::wall, "left"},
+                    {Side::i_max, 0, 16, SegmentKind::wall, "right"},
+                    {Side::j_min, 0, 16, SegmentKind::wall, "bottom"},
+                    {Side::j_max, 0, 16, SegmentKind::wall, "lid"}};
+    return g;
+}
+
+SolverSettings settings(TimeMode mode) {
+    SolverSettings s;
+    s.mode = mode;
+    s.local_step_interval = 7;  // renewals fall between the restart points
+    s.velocity_overrides = {moving_wall("lid", {1.0, 0.0})};
+    return s;
+}
+
+FlowFields at_rest() {
+    FlowFields f;
+    f.u.assign(256, 0.0);
+    f.v = f.u;
+    f.pressure = f.u;
+    return f;
+}
+
+void step(FlowSolver& s, TimeMode mode, int n) {
+    for (int k = 0; k < n; ++k) {
+        // Time-accurate: a step size that changes every step (variable-step BDF2 history).
+        const StepReport r =
+            mode == TimeMode::steady ? s.advance_pseudo_time() : s.advance(0.01 + 0.001 * (k % 3));
+        ASSERT_TRUE(r.finite);
+    }
+}
+
+void expect_same_bits(const FlowFields& a, const FlowFields& b) {
+    ASSERT_EQ(a.u.size(), b.u.size());
+    for (std::size_t k = 0; k < a.u.size(); ++k) {
+        EXPECT_EQ(a.u[k], b.u[k]) << k;
+        EXPECT_EQ(a.v[k], b.v[k]) << k;
+        EXPECT_EQ(a.pressure[k], b.pressure[k]) << k;
+    }
+}
+
+class Restart : public ::testing::TestWithParam<TimeMode> {};
+
+TEST_P(Restart, InterruptedRunGivesTheSameBitsAsAnUninterruptedOne) {
+    const TimeMode mode = GetParam();
+    const StructuredGrid g = cavity();
+    FlowSolver whole(g, {400.0, 0.0}, settings(mode));
+    whole.initialize(at_rest());
+    step(whole, mode, 30);
+
+    FlowSolver first(g, {400.0, 0.0}, settings(mode));
+    first.initialize(at_rest());
+    step(first, mode, 12);
+    const std::vector<NamedArray> saved = first.state();
+    FlowSolver second(g, {400.0, 0.0}, settings(mode));  // a fresh process, as after a restart
+    second.restore(saved);
+    EXPECT_EQ(second.step_count(), 12);
+    step(second, mode, 18);
+
+    expect_same_bits(whole.fields(), second.fields());
+    EXPECT_EQ(whole.time(), second.time());
+    EXPECT_EQ(whole.step_count(), second.step_count());
+}
+
+INSTANTIATE_TEST_SUITE_P(BothModes, Restart,
+                         ::testing::Values(TimeMode::steady, TimeMode::time_accurate));
+
+TEST(Restart, MissingArrayIsAnInputErrorNamingIt) {
+    FlowSolver s(cavity(), {100.0, 0.0}, settings(TimeMode::steady));
+    std::vector<NamedArray> state = s.state();
+    state.erase(state.begin());
+    try {
+        s.restore(state);
+        FAIL() << "no error";
+    } catch (const InputError& e) {
+        EXPECT_NE(std::string(e.what()).find("velocity_u"), std::string::npos);
+    }
+}
+
+TEST(Determinism, TwoRunsGiveTheSameBits) {
+    FlowSolver a(cavity(), {400.0, 0.0}, settings(TimeMode::steady));
+    FlowSolver b(cavity(), {400.0, 0.0}, settings(TimeMode::steady));
+    a.initialize(at_rest());
+    b.initialize(at_rest());
+    step(a, TimeMode::steady, 20);
+    step(b, TimeMode::steady, 20);
+    expect_same_bits(a.fields(), b.fields());
+}
+
+TEST(Divergence, NonFiniteValueIsReportedWithCellAndVariable) {
+    FlowSolver s(cavity(), {100.0, 0.0}, settings(TimeMode::time_accurate));
+    FlowFields f = at_rest();
+    f.v[static_cast<std::size_t>(5 * 16 + 3)] = std::numeric_limits<double>::quiet_NaN();
+    s.initialize(f);
+    const StepReport r = s.advance(0.01);
+    EXPECT_FALSE(r.finite);
+    EXPECT_EQ(r.step, 1);
+    // The first non-finite value in memory order (the NaN reaches every cell through the
+    // pressure solve, so it is cell (0, 0)); the variable is named.
+    EXPECT_TRUE(r.worst_variable == "u" || r.worst_variable == "v" ||
+                r.worst_variable == "pressure");
+    EXPECT_GE(r.worst_i, 0);
+    EXPECT_LT(r.worst_i, 16);
+}
+
+TEST(Divergence, LargestResidualCellIsReportedWhileFinite) {
+    FlowSolver s(cavity(), {100.0, 0.0}, settings(TimeMode::time_accurate));
+    FlowFields f = at_rest();
+    f.u[static_cast<std::size_t>(9 * 16 + 11)] = 50.0;  // a spike that the step must remove
+    s.initialize(f);
+    const StepReport r = s.advance(0.001);
+    EXPECT_TRUE(r.finite);
+    EXPECT_EQ(r.worst_i, 11);
+    EXPECT_EQ(r.worst_j, 9);
+    EXPECT_EQ(r.worst_variable, "u");
+}
+
+TEST(Settings, BadValueIsAnInputErrorNamingTheSetting) {
+    SolverSettings s = settings(TimeMode::steady);
+    s.pseudo_cfl = -1.0;
+    try {
+        FlowSolver solver(cavity(), {100.0, 0.0}, s);
+        FAIL() << "no error";
+    } catch (const InputError& e) {
+        EXPECT_NE(std::string(e.what()).find("pseudo_cfl"), std::string::npos);
+    }
+}
+
+}  // namespace
+}  // namespace veer
