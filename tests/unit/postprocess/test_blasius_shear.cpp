@@ -81,14 +81,11 @@ TEST(BlasiusShear, TwoCellReconstructionGivesTheBlasiusSkinFriction) {
         const double blasius_cf = 2.0 * 0.332057 / std::sqrt(re * w.center.x);  // 0.664/sqrt(Re_x)
         worst = std::max(worst, std::abs(cf / blasius_cf - 1.0));
     }
-    ' vanish on the wall, so f' =
-        a eta - a ^ 2 eta ^ 4 / 48 + ... and
-        the quadratic
-                // fit through two cells is off by O(a eta^2) relative: measured 2.5e-3 at most (at
-                // x = 0.1, where the first centroids lie deepest in eta, 0.32 and 0.69); 0.5%
-                // allows twice that.
-                    EXPECT_LT(worst, 5e-3)
-            << worst;
+    // The third and fourth derivatives of f vanish on the wall, so f' = a eta - a^2 eta^4 / 48
+    // + ... and the quadratic fit through two cells is off by O(a eta^2) relative: measured
+    // 2.5e-3 at most (at x = 0.1, where the first centroids lie deepest in eta, 0.32 and
+    // 0.69); 0.5% allows twice that.
+    EXPECT_LT(worst, 5e-3) << worst;
 }
 
 }  // namespace
