@@ -253,3 +253,36 @@ TEST(CGrid, GrowthRatioAndCellsForACap) {
 
 }  // namespace
 }  // namespace veer
+
+namespace veer {
+namespace {
+
+TEST(CGrid, FoldingLayersAreRefusedWithADiagnosis) {
+    // A thin section (6% thick) with a deep notch in its upper surface between 40% and 60% chord:
+    // the lines from the notch's sides converge faster than the smoothing can part them.
+    const int around = 128, half = 64;
+    std::vector<Vec2> s(around + 1);
+    for (int k = 0; k <= half; ++k) {
+        const double x = 0.5 * (1 + std::cos(std::numbers::pi * k / half));
+        const double yt = 0.06 * std::sin(std::numbers::pi * x);
+        const double notch =
+            (x > 0.4 && x < 0.6) ? 0.1 * std::sin(std::numbers::pi * (x - 0.4) / 0.2) : 0.0;
+        s[static_cast<std::size_t>(k)] = {x, -yt};
+        s[static_cast<std::size_t>(around - k)] = {x, yt - notch};
+    }
+    s.front() = s.back() = {1.0, 0.0};
+    CGridSpec spec = spec_for(around, 32);
+    spec.first_cell = 2e-3;
+    try {
+        (void)generate_cgrid(s, spec);
+        ADD_FAILURE() << "a folded grid was returned";
+    } catch (const InputError& e) {
+        const std::string what = e.what();
+        EXPECT_NE(what.find("folds at cell"), std::string::npos) << what;
+        EXPECT_NE(what.find("upper surface"), std::string::npos) << what;
+        EXPECT_NE(what.find("normal"), std::string::npos) << what;
+    }
+}
+
+}  // namespace
+}  // namespace veer
