@@ -1,5 +1,6 @@
 #include "solver/line_relaxation.hpp"
 
+#include <algorithm>
 #include <cmath>
 
 #include "solver/loops.hpp"
@@ -51,30 +52,55 @@ void solve_line(const MomentumSystem& s, int len, Cell cell, Sub sub, Super supe
     }
 }
 
+/// j-lines of one colour, in blocks of neighbouring columns so that the inner loops run along i
+/// (contiguous memory): forward elimination row by row, then back substitution.
 void sweep_j_lines(const MomentumSystem& s, const Connectivity& con, CellView u, CellView v,
                    LineWork& w) {
     const int ni = con.ni, nj = con.nj;
+    constexpr int block = 64;
+    const int blocks = (ni + block - 1) / block;
     for (int colour = 0; colour < 2; ++colour) {
         fill_connected_ghosts(con, u);
         fill_connected_ghosts(con, v);
-        for_each_line(colour, ni, 2, [&](int i) {
-            solve_line(
-                s, nj, [&](int k) { return idx(ni, i, k); },
-                [&](std::size_t c) { return s.south[c]; },
-                [&](std::size_t c) { return s.north[c]; },
-                [&](int k, std::size_t c, double& eu, double& ev) {
-                    eu = s.west[c] * u(i - 1, k) + s.east[c] * u(i + 1, k);
-                    ev = s.west[c] * v(i - 1, k) + s.east[c] * v(i + 1, k);
-                    if (k == 0) {
+        for_each_line(0, blocks, 1, [&](int b) {
+            const int i0 = b * block + ((b * block) % 2 == colour ? 0 : 1);
+            const int i1 = std::min(ni, (b + 1) * block);
+            for (int j = 0; j < nj; ++j)
+                for (int i = i0; i < i1; i += 2) {
+                    const std::size_t c = idx(ni, i, j);
+                    double eu = s.west[c] * u(i - 1, j) + s.east[c] * u(i + 1, j);
+                    double ev = s.west[c] * v(i - 1, j) + s.east[c] * v(i + 1, j);
+                    double a = 0.0, prev_c = 0.0, prev_u = 0.0, prev_v = 0.0;
+                    if (j == 0) {
                         eu += s.south[c] * u(i, -1);
                         ev += s.south[c] * v(i, -1);
+                    } else {
+                        const std::size_t below = c - static_cast<std::size_t>(ni);
+                        a = s.south[c];
+                        prev_c = w.c_prime[below];
+                        prev_u = w.d_u[below];
+                        prev_v = w.d_v[below];
                     }
-                    if (k == nj - 1) {
+                    if (j == nj - 1) {
                         eu += s.north[c] * u(i, nj);
                         ev += s.north[c] * v(i, nj);
                     }
-                },
-                w, u, v, ni);
+                    const double inv = 1.0 / (s.diag[c] - a * prev_c);
+                    w.c_prime[c] = (j + 1 < nj ? s.north[c] : 0.0) * inv;
+                    w.d_u[c] = (s.rhs_u[c] + eu + a * prev_u) * inv;
+                    w.d_v[c] = (s.rhs_v[c] + ev + a * prev_v) * inv;
+                }
+            for (int i = i0; i < i1; i += 2) {
+                const std::size_t c = idx(ni, i, nj - 1);
+                u(i, nj - 1) = w.d_u[c];
+                v(i, nj - 1) = w.d_v[c];
+            }
+            for (int j = nj - 2; j >= 0; --j)
+                for (int i = i0; i < i1; i += 2) {
+                    const std::size_t c = idx(ni, i, j);
+                    u(i, j) = w.d_u[c] + w.c_prime[c] * u(i, j + 1);
+                    v(i, j) = w.d_v[c] + w.c_prime[c] * v(i, j + 1);
+                }
         });
     }
 }
