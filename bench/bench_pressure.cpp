@@ -161,6 +161,7 @@ void print_ratio(const Timing& ref, const Timing& mg) {
 
 int main(int argc, char** argv) {
     const Options o = parse(argc, argv);
+    std::setvbuf(stdout, nullptr, _IOLBF, 0);  // line by line, also into a file
     std::printf("pressure solve to relative residual 1e-8, %d OpenMP threads, best of %d\n",
                 omp_get_max_threads(), o.repeats);
     std::printf("C-grid: wake 3 around / 16 each side, far field 30 chords, first cell 1e-3\n\n");

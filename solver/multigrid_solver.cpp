@@ -14,7 +14,7 @@ struct MultigridSolver::Level {
     PressureOperator op;
     LineRelaxation j_lines;
     LineRelaxation i_lines;
-    std::vector<double> b, x, r;  ///< right-hand side, correction, residual of this level
+    std::vector<double> b, x;  ///< right-hand side and correction of this level
 };
 
 MultigridSolver::MultigridSolver(MultigridOptions options) : m_options(options) {}
@@ -45,7 +45,6 @@ void MultigridSolver::setup(const PoissonStencil& stencil) {
         const auto n = static_cast<std::size_t>(level.op.size());
         level.b.assign(n, 0.0);
         level.x.assign(n, 0.0);
-        level.r.assign(n, 0.0);
         if (l == levels - 1) break;
         level.j_lines = LineRelaxation(*current, level.op, LineRelaxation::Direction::j_lines);
         level.i_lines = LineRelaxation(*current, level.op, LineRelaxation::Direction::i_lines);
@@ -71,15 +70,18 @@ void MultigridSolver::cycle(std::size_t l) {
         level.j_lines.sweep(level.op, level.b, level.x, true);
         if (m_options.along_c_lines) level.i_lines.sweep(level.op, level.b, level.x, true);
     }
-    operator_residual(level.op, level.b, level.x, level.r);
+    // Residual and restriction fused: the sum of the four fine residuals of each coarse cell.
     Level& coarse = m_levels[l + 1];
     const int ni = level.op.ni, nic = coarse.op.ni, njc = coarse.op.nj;
-    const double* r = level.r.data();
+    const PressureRow* rows = level.op.rows.data();
+    const double* b = level.b.data();
+    const double* xf = level.x.data();
     double* bc = coarse.b.data();
-    parallel_for(njc, parallel_cell_threshold / nic, [=](int jc) {
+    parallel_for(njc, parallel_cell_threshold / (4 * nic), [=](int jc) {
         for (int ic = 0; ic < nic; ++ic) {
             const int f = 2 * ic + ni * 2 * jc;
-            bc[ic + nic * jc] = (r[f] + r[f + 1]) + (r[f + ni] + r[f + ni + 1]);
+            auto r = [=](int c) { return b[c] - row_product(rows[c], xf, c); };
+            bc[ic + nic * jc] = (r(f) + r(f + 1)) + (r(f + ni) + r(f + ni + 1));
         }
     });
     if (coarse.op.singular) remove_mean(coarse.b);
@@ -99,12 +101,16 @@ void MultigridSolver::cycle(std::size_t l) {
     }
 }
 
-void MultigridSolver::precondition(const std::vector<double>& r, std::vector<double>& z) {
+void MultigridSolver::precondition(std::vector<double>& r, std::vector<double>& z) {
     Level& top = m_levels.front();
-    top.b = r;
+    // Borrow r and z as the finest level's right-hand side and correction (no copies).
+    top.b.swap(r);
+    z.resize(top.b.size());
+    top.x.swap(z);
     std::fill(top.x.begin(), top.x.end(), 0.0);
     cycle(0);
-    z = top.x;
+    top.b.swap(r);
+    top.x.swap(z);
     if (top.op.singular) remove_mean(z);
 }
 
@@ -134,9 +140,16 @@ PressureSolveStats MultigridSolver::iterate_pcg(const std::vector<double>& b,
     for (st.iterations = 1; st.iterations <= max_iter; ++st.iterations) {
         apply_operator(op, dir, q);
         const double alpha = rz / ordered_dot(dir, q);
-        axpy(alpha, dir, x);
-        axpy(-alpha, q, r);
-        st.final_residual = norm2(r) / b_norm;
+        double* xp = x.data();
+        double* rp = r.data();
+        const double* dp = dir.data();
+        const double* qp = q.data();
+        const double rr = ordered_block_sum(r.size(), [=](std::size_t k) {  // fused update
+            xp[k] += alpha * dp[k];
+            rp[k] -= alpha * qp[k];
+            return rp[k] * rp[k];
+        });
+        st.final_residual = std::sqrt(rr) / b_norm;
         m_history.push_back(st.final_residual);
         if (st.final_residual <= rel_tol || st.iterations == max_iter) break;
         precondition(r, z);
@@ -144,9 +157,9 @@ PressureSolveStats MultigridSolver::iterate_pcg(const std::vector<double>& b,
         const double beta = rz_next / rz;
         rz = rz_next;
         const double* zp = z.data();
-        double* dp = dir.data();
+        double* dir_p = dir.data();
         parallel_for(static_cast<int>(z.size()), parallel_cell_threshold,
-                     [=](int k) { dp[k] = zp[k] + beta * dp[k]; });
+                     [=](int k) { dir_p[k] = zp[k] + beta * dir_p[k]; });
     }
     return st;
 }

@@ -26,6 +26,8 @@ struct MultigridOptions {
     int cycle_index = 2;        ///< coarse-grid visits per level: 1 = V-cycle, 2 = W-cycle
 };
 
+/// MG-PCG (or plain cycles) on one stencil: setup builds the levels, line factors and the
+/// coarsest Cholesky factor in a few passes over the grid; solve iterates on cell-centred p.
 class MultigridSolver final : public PressureSolver {
 public:
     explicit MultigridSolver(MultigridOptions options = {});
@@ -45,7 +47,7 @@ public:
 private:
     struct Level;
     void cycle(std::size_t level);
-    void precondition(const std::vector<double>& r, std::vector<double>& z);
+    void precondition(std::vector<double>& r, std::vector<double>& z);
     PressureSolveStats iterate_pcg(const std::vector<double>& b, std::vector<double>& x,
                                    double b_norm, double rel_tol, int max_iter);
     PressureSolveStats iterate_cycles(const std::vector<double>& b, std::vector<double>& x,

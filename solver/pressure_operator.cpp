@@ -107,12 +107,7 @@ void apply_operator(const PressureOperator& op, const std::vector<double>& x,
     const PressureRow* rows = op.rows.data();
     const double* xp = x.data();
     double* yp = y.data();
-    parallel_for(n, parallel_cell_threshold, [=](int c) {
-        const PressureRow& r = rows[c];
-        yp[c] = r.diagonal * xp[c] - r.coupling[0] * xp[r.neighbour[0]] -
-                r.coupling[1] * xp[r.neighbour[1]] - r.coupling[2] * xp[r.neighbour[2]] -
-                r.coupling[3] * xp[r.neighbour[3]];
-    });
+    parallel_for(n, parallel_cell_threshold, [=](int c) { yp[c] = row_product(rows[c], xp, c); });
 }
 
 void operator_residual(const PressureOperator& op, const std::vector<double>& b,
@@ -123,37 +118,17 @@ void operator_residual(const PressureOperator& op, const std::vector<double>& b,
     parallel_for(op.size(), parallel_cell_threshold, [=](int c) { rp[c] = bp[c] - rp[c]; });
 }
 
-namespace {
-/// Block sums of f(k) over [0, n), blocks summed in parallel, combined in block order.
-template <class Term>
-double block_ordered_sum(std::size_t n, Term term) {
-    constexpr std::size_t block = 2048;
-    const std::size_t blocks = (n + block - 1) / block;
-    std::vector<double> partial(blocks, 0.0);
-    parallel_for(static_cast<int>(blocks), 3, [&](int b) {
-        const std::size_t k0 = static_cast<std::size_t>(b) * block;
-        const std::size_t k1 = std::min(n, k0 + block);
-        double s = 0.0;
-        for (std::size_t k = k0; k < k1; ++k) s += term(k);
-        partial[static_cast<std::size_t>(b)] = s;
-    });
-    double total = 0.0;
-    for (double s : partial) total += s;
-    return total;
-}
-}  // namespace
-
 double ordered_dot(const std::vector<double>& a, const std::vector<double>& b) {
     VEER_ASSERT(a.size() == b.size(), "dot of vectors of different sizes");
     const double* ap = a.data();
     const double* bp = b.data();
-    return block_ordered_sum(a.size(), [=](std::size_t k) { return ap[k] * bp[k]; });
+    return ordered_block_sum(a.size(), [=](std::size_t k) { return ap[k] * bp[k]; });
 }
 
 double ordered_mean(const std::vector<double>& a) {
     if (a.empty()) return 0.0;
     const double* ap = a.data();
-    return block_ordered_sum(a.size(), [=](std::size_t k) { return ap[k]; }) /
+    return ordered_block_sum(a.size(), [=](std::size_t k) { return ap[k]; }) /
            static_cast<double>(a.size());
 }
 

@@ -33,6 +33,13 @@ struct PressureOperator {
     int size() const { return static_cast<int>(rows.size()); }
 };
 
+/// (A x)_c of one row; the kernel of apply_operator (and of the fused multigrid residual).
+inline double row_product(const PressureRow& r, const double* x, int c) {
+    return r.diagonal * x[c] - r.coupling[0] * x[r.neighbour[0]] -
+           r.coupling[1] * x[r.neighbour[1]] - r.coupling[2] * x[r.neighbour[2]] -
+           r.coupling[3] * x[r.neighbour[3]];
+}
+
 /// Row form of a stencil. Checks sizes and that wake-cut and periodic faces are not Dirichlet.
 PressureOperator make_pressure_operator(const PoissonStencil& stencil);
 
