@@ -56,10 +56,36 @@ LineRelaxation::LineRelaxation(const PoissonStencil& s, const PressureOperator& 
         }
     }
     m_lines = static_cast<int>(m_line_begin.size()) - 1;
-    // Wall-normal lines side by side in chunks of 32 (rows of 32 cells, every colour-th column);
-    // along-C lines are long and contiguous already: one per chunk.
-    pack(colour_lines(op), direction == Direction::j_lines ? 32 : 1);
+    // Lines relaxed side by side: 32 wall-normal lines walk the grid row by row (one memory
+    // stream instead of one page per cell); 4 along-C lines interleave four independent
+    // recurrences (the tridiagonal elimination is latency-bound on one line).
+    pack(colour_lines(op), direction == Direction::j_lines ? 32 : 4);
     m_work.assign(m_cell.size(), 0.0);
+}
+
+// The couplings of a cell that are not on its line, old values on the right-hand side: the two
+// across the line (kept per position, read as a stream), and at a line end the one that closes
+// a periodic line (lagged). Couplings of 0 (boundaries) are dropped.
+void LineRelaxation::add_off_line(const PressureRow& row, int cell, int prev_slot, int next_slot,
+                                  bool line_end) {
+    double c[3] = {0.0, 0.0, 0.0};
+    int nb[3] = {cell, cell, cell};
+    int count = 0;
+    for (int s = 0; s < 4; ++s) {
+        const auto k = static_cast<std::size_t>(s);
+        if (s == prev_slot || s == next_slot || row.coupling[k] == 0.0) continue;
+        VEER_VERIFY(count < 3, "a line cell with four off-line couplings");
+        c[count] = row.coupling[k];
+        nb[count] = row.neighbour[k];
+        ++count;
+    }
+    VEER_VERIFY(count < 3 || line_end, "a third off-line coupling away from a line end");
+    m_off_coupling0.push_back(c[0]);
+    m_off_coupling1.push_back(c[1]);
+    m_end_coupling.push_back(c[2]);
+    m_off_neighbour0.push_back(nb[0]);
+    m_off_neighbour1.push_back(nb[1]);
+    m_end_neighbour.push_back(nb[2]);
 }
 
 // Each cell's previous-cell slot is given; its next-cell slot is the previous slot of the next
@@ -86,15 +112,12 @@ void LineRelaxation::add_line(const PressureOperator& op, const std::vector<int>
             VEER_VERIFY(row.neighbour[static_cast<std::size_t>(ns)] == next_cell,
                         "line cells are not neighbours");
         }
-        unsigned char off = 0x0f;
         const double a = ps == no_slot ? 0.0 : row.coupling[static_cast<std::size_t>(ps)];
         const double u = ns == no_slot ? 0.0 : row.coupling[static_cast<std::size_t>(ns)];
-        if (ps != no_slot) off = static_cast<unsigned char>(off & ~(1u << ps));
-        if (ns != no_slot) off = static_cast<unsigned char>(off & ~(1u << ns));
+        add_off_line(row, cells[static_cast<std::size_t>(k)], ps, ns, k == 0 || k + 1 == n);
         const double pivot = row.diagonal - a * w_prev;
         VEER_VERIFY(pivot > 0.0, "line relaxation met a singular line (no coupling off it)");
         m_cell.push_back(cells[static_cast<std::size_t>(k)]);
-        m_off_line.push_back(off);
         m_lower.push_back(a);
         m_inv_pivot.push_back(1.0 / pivot);
         w_prev = u / pivot;
@@ -167,30 +190,32 @@ void LineRelaxation::pack(const std::vector<int>& colour, int chunk_width) {
         m_colour_begin.push_back(static_cast<int>(m_chunks.size()));
     }
     reorder(m_cell, from);
-    reorder(m_off_line, from);
+    for (auto* v : {&m_off_coupling0, &m_off_coupling1, &m_end_coupling}) reorder(*v, from);
+    for (auto* v : {&m_off_neighbour0, &m_off_neighbour1, &m_end_neighbour}) reorder(*v, from);
     reorder(m_lower, from);
     reorder(m_upper_over, from);
     reorder(m_inv_pivot, from);
     m_line_begin.assign(1, 0);  // no longer meaningful after packing
 }
 
-void LineRelaxation::relax_chunk(const PressureOperator& op, const double* b, double* x,
-                                 const Chunk& ch) const {
+void LineRelaxation::relax_chunk(const double* b, double* x, const Chunk& ch) const {
     const std::size_t n = static_cast<std::size_t>(ch.lines);
     const std::size_t p0 = static_cast<std::size_t>(ch.base);
     const std::size_t p1 = p0 + n * static_cast<std::size_t>(ch.length);
     double* y = m_work.data();
+    const auto length = static_cast<std::size_t>(ch.length);
     // Forward elimination, off-line couplings (old values) moved to the right-hand side. Every
     // right-hand side is formed before any x of this chunk is written.
-    for (std::size_t p = p0; p < p1; ++p) {
-        const int c = m_cell[p];
-        const PressureRow& row = op.rows[static_cast<std::size_t>(c)];
-        double r = b[c];
-        const unsigned off = m_off_line[p];
-        for (std::size_t s = 0; s < 4; ++s)
-            if (off & (1u << s)) r += row.coupling[s] * x[row.neighbour[s]];
-        const double y_prev = p >= p0 + n ? y[p - n] : 0.0;
-        y[p] = (r + m_lower[p] * y_prev) * m_inv_pivot[p];
+    for (std::size_t k = 0; k < length; ++k) {
+        const bool end = k == 0 || k + 1 == length;
+        for (std::size_t p = p0 + k * n; p < p0 + (k + 1) * n; ++p) {
+            const int c = m_cell[p];
+            double r = b[c] + m_off_coupling0[p] * x[m_off_neighbour0[p]] +
+                       m_off_coupling1[p] * x[m_off_neighbour1[p]];
+            if (end) r += m_end_coupling[p] * x[m_end_neighbour[p]];
+            const double y_prev = k > 0 ? y[p - n] : 0.0;
+            y[p] = (r + m_lower[p] * y_prev) * m_inv_pivot[p];
+        }
     }
     // Back substitution, last position of every line first.
     for (std::size_t p = p1; p-- > p0;) {
@@ -209,7 +234,7 @@ void LineRelaxation::sweep(const PressureOperator& op, const std::vector<double>
         const int count = m_colour_begin[static_cast<std::size_t>(c) + 1] - first;
         const Chunk* chunks = m_chunks.data() + first;
         parallel_for(count, min_parallel,
-                     [&](int l) { relax_chunk(op, b.data(), x.data(), chunks[l]); });
+                     [&](int l) { relax_chunk(b.data(), x.data(), chunks[l]); });
     }
 }
 

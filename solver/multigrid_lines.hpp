@@ -36,7 +36,8 @@ public:
 
 private:
     /// Lines of one colour and one length, stored position-major (position k of every line, then
-    /// k + 1, ...), so that relaxing side-by-side wall-normal lines walks the grid row by row.
+    /// k + 1, ...): side-by-side wall-normal lines walk the grid row by row, and several lines'
+    /// recurrences run interleaved.
     struct Chunk {
         int base = 0;    ///< first storage index
         int lines = 0;   ///< lines in the chunk
@@ -47,18 +48,22 @@ private:
                   const std::vector<int>& prev_slot);
     std::vector<int> colour_lines(const PressureOperator& op) const;
     void pack(const std::vector<int>& colour, int chunk_width);
-    void relax_chunk(const PressureOperator& op, const double* b, double* x,
-                     const Chunk& chunk) const;
+    void add_off_line(const PressureRow& row, int cell, int prev_slot, int next_slot,
+                      bool line_end);
+    void relax_chunk(const double* b, double* x, const Chunk& chunk) const;
 
     // Per stored position (cell of a line): built line by line, then packed into chunks.
-    std::vector<int> m_line_begin{0};       ///< while building: line l at [begin[l], begin[l+1])
-    std::vector<int> m_cell;                ///< cell index
-    std::vector<unsigned char> m_off_line;  ///< bit s set: slot s of that cell is off the line
-    std::vector<double> m_lower;            ///< coupling to the previous cell of the line (>= 0)
-    std::vector<double> m_upper_over;       ///< Thomas factor: upper coupling / pivot
-    std::vector<double> m_inv_pivot;        ///< Thomas factor: 1 / pivot
-    std::vector<Chunk> m_chunks;            ///< by colour
-    std::vector<int> m_colour_begin{0};     ///< chunks of colour c: [begin[c], begin[c+1])
+    std::vector<int> m_line_begin{0};  ///< while building: line l at [begin[l], begin[l+1])
+    std::vector<int> m_cell;           ///< cell index
+    std::vector<double> m_off_coupling0, m_off_coupling1;  ///< couplings across the line
+    std::vector<int> m_off_neighbour0, m_off_neighbour1;   ///< their cells (self where none)
+    std::vector<double> m_end_coupling;  ///< at line ends: the lagged coupling closing the line
+    std::vector<int> m_end_neighbour;
+    std::vector<double> m_lower;         ///< coupling to the previous cell of the line (>= 0)
+    std::vector<double> m_upper_over;    ///< Thomas factor: upper coupling / pivot
+    std::vector<double> m_inv_pivot;     ///< Thomas factor: 1 / pivot
+    std::vector<Chunk> m_chunks;         ///< by colour
+    std::vector<int> m_colour_begin{0};  ///< chunks of colour c: [begin[c], begin[c+1])
     int m_lines = 0;
     mutable std::vector<double> m_work;  ///< elimination values, one per position
 };
