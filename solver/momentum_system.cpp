@@ -19,6 +19,11 @@ void MomentumSystem::resize(int ni, int nj) {
 
 namespace {
 
+/// Laminar plus eddy viscosity on one face.
+inline double face_nu(double nu, const std::vector<double>* eddy, std::size_t k) {
+    return eddy ? nu + (*eddy)[k] : nu;
+}
+
 /// F * (limited upwind-biased value - upwind value): the deferred convective correction.
 inline double convective_correction(double flux, double q_far_l, double q_l, double q_r,
                                     double q_far_r) {
@@ -32,10 +37,10 @@ inline double convective_correction(double flux, double q_far_l, double q_l, dou
 
 /// Explicit face fluxes of both families (towards +i / +j).
 void face_pass(const FaceGeometry& g, const MomentumInputs& in, MomentumSystem& s) {
-    const double nu = in.nu;
     const FaceFamily& fi = g.i_faces;
     for_each_cell({0, g.ni + 1, 0, g.nj}, [&](int f, int j) {
         const std::size_t k = g.face_i(f, j);
+        const double nu = in.nu + (in.eddy_i ? (*in.eddy_i)[k] : 0.0);
         const Vec2 sk = fi.skew[k];
         const double du = nu * (sk.x * 0.5 * (in.ux(f - 1, j) + in.ux(f, j)) +
                                 sk.y * 0.5 * (in.uy(f - 1, j) + in.uy(f, j)));
@@ -58,6 +63,7 @@ void face_pass(const FaceGeometry& g, const MomentumInputs& in, MomentumSystem& 
     const FaceFamily& fj = g.j_faces;
     for_each_cell({0, g.ni, 0, g.nj + 1}, [&](int i, int f) {
         const std::size_t k = g.face_j(i, f);
+        const double nu = in.nu + (in.eddy_j ? (*in.eddy_j)[k] : 0.0);
         const Vec2 sk = fj.skew[k];
         const double du = nu * (sk.x * 0.5 * (in.ux(i, f - 1) + in.ux(i, f)) +
                                 sk.y * 0.5 * (in.uy(i, f - 1) + in.uy(i, f)));
@@ -81,7 +87,6 @@ void face_pass(const FaceGeometry& g, const MomentumInputs& in, MomentumSystem& 
 
 /// Coefficients and right-hand sides of every cell, all four faces treated as interior.
 void cell_pass(const FaceGeometry& g, const MomentumInputs& in, MomentumSystem& s) {
-    const double nu = in.nu;
     const std::vector<double>& fx = *in.flux_i;
     const std::vector<double>& fy = *in.flux_j;
     const double* oi = g.i_faces.ortho.data();
@@ -91,12 +96,16 @@ void cell_pass(const FaceGeometry& g, const MomentumInputs& in, MomentumSystem& 
         const std::size_t w = g.face_i(i, j), e = g.face_i(i + 1, j);
         const std::size_t so = g.face_j(i, j), n = g.face_j(i, j + 1);
         const double fw = fx[w], fe = fx[e], fs = fy[so], fn = fy[n];
-        s.west[c] = nu * oi[w] + std::max(fw, 0.0);
-        s.east[c] = nu * oi[e] + std::max(-fe, 0.0);
-        s.south[c] = nu * oj[so] + std::max(fs, 0.0);
-        s.north[c] = nu * oj[n] + std::max(-fn, 0.0);
-        s.diag[c] = (*in.time_diag)[c] + nu * (oi[w] + oi[e] + oj[so] + oj[n]) +
-                    std::max(-fw, 0.0) + std::max(fe, 0.0) + std::max(-fs, 0.0) + std::max(fn, 0.0);
+        const double dw = face_nu(in.nu, in.eddy_i, w) * oi[w];
+        const double de = face_nu(in.nu, in.eddy_i, e) * oi[e];
+        const double ds = face_nu(in.nu, in.eddy_j, so) * oj[so];
+        const double dn = face_nu(in.nu, in.eddy_j, n) * oj[n];
+        s.west[c] = dw + std::max(fw, 0.0);
+        s.east[c] = de + std::max(-fe, 0.0);
+        s.south[c] = ds + std::max(fs, 0.0);
+        s.north[c] = dn + std::max(-fn, 0.0);
+        s.diag[c] = (*in.time_diag)[c] + dw + de + ds + dn + std::max(-fw, 0.0) +
+                    std::max(fe, 0.0) + std::max(-fs, 0.0) + std::max(fn, 0.0);
         const double vol = g.volume[c];
         double bu = (*in.time_rhs_u)[c] - vol * in.grad_px(i, j) + s.explicit_i_u[e] -
                     s.explicit_i_u[w] + s.explicit_j_u[n] - s.explicit_j_u[so];
@@ -116,7 +125,8 @@ void fold_boundaries(const FaceGeometry& g, const std::vector<BoundaryFace>& fac
         const std::size_t c = g.cell(b.i, b.j);
         const FaceFamily& fam = b.i_face ? g.i_faces : g.j_faces;
         const double flux_out = b.outward * (b.i_face ? *in.flux_i : *in.flux_j)[b.face];
-        const double dg = in.nu * fam.ortho[b.face];
+        const double dg =
+            face_nu(in.nu, b.i_face ? in.eddy_i : in.eddy_j, b.face) * fam.ortho[b.face];
         double& slot = b.i_face ? (b.outward < 0 ? s.west[c] : s.east[c])
                                 : (b.outward < 0 ? s.south[c] : s.north[c]);
         slot = 0.0;

@@ -41,6 +41,9 @@ struct MomentumInputs {
     const std::vector<double>* time_diag;
     const std::vector<double>* time_rhs_u;
     const std::vector<double>* time_rhs_v;
+    /// Eddy viscosity on the faces (turbulence models), added to nu; null for laminar flow.
+    const std::vector<double>* eddy_i = nullptr;
+    const std::vector<double>* eddy_j = nullptr;
     /// Body force per unit volume x volume (manufactured solutions); null where none.
     const std::vector<double>* source_u = nullptr;
     const std::vector<double>* source_v = nullptr;
