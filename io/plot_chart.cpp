@@ -56,6 +56,16 @@ Frame make_frame(const Chart& c, int width, int height) {
         x0 = xc - 0.5 * per_px * f.width, x1 = xc + 0.5 * per_px * f.width;
         y0 = yc - 0.5 * per_px * f.height, y1 = yc + 0.5 * per_px * f.height;
     }
+    // A margin of 4 % keeps markers at the extremes clear of the frame.
+    auto pad = [](double& lo, double& hi) {
+        if (!std::isfinite(lo) || !std::isfinite(hi)) return;
+        const double m = 0.04 * (hi - lo);
+        lo -= m, hi += m;
+    };
+    if (!c.equal_aspect) {
+        pad(x0, x1);
+        if (!f.log_y) pad(y0, y1);
+    }
     f.x = nice_ticks(x0, x1);
     f.y = f.log_y ? decade_ticks(y0, y1) : nice_ticks(y0, y1);
     if (c.equal_aspect) {
@@ -129,7 +139,23 @@ void draw_legend(Canvas& cv, const Chart& c, const Frame& f) {
         if (!s.label.empty()) widest = std::max(widest, cv.text_width(s.label, 11)), ++entries;
     if (entries == 0) return;
     const double w = widest + 44, h = 18.0 * entries + 8;
-    const double x = f.left + f.width - w - 8, y = f.top + 8;
+    // The corner whose box covers the fewest data points.
+    double x = f.left + f.width - w - 8, y = f.top + 8;
+    int fewest = -1;
+    for (const auto& [cx, cy] :
+         {std::pair{f.left + f.width - w - 8, f.top + 8}, std::pair{f.left + 8, f.top + 8},
+          std::pair{f.left + f.width - w - 8, f.top + f.height - h - 8},
+          std::pair{f.left + 8, f.top + f.height - h - 8}}) {
+        int covered = 0;
+        for (const ChartSeries& s : c.series)
+            for (std::size_t k = 0; k < std::min(s.x.size(), s.y.size()); ++k) {
+                if (!std::isfinite(s.x[k]) || !std::isfinite(s.y[k])) continue;
+                if (f.log_y && s.y[k] <= 0) continue;
+                const double px = f.px(s.x[k]), py = f.py(s.y[k]);
+                covered += px >= cx - 4 && px <= cx + w + 4 && py >= cy - 4 && py <= cy + h + 4;
+            }
+        if (fewest < 0 || covered < fewest) fewest = covered, x = cx, y = cy;
+    }
     cv.fill_rectangle(x, y, w, h, {1, 1, 1});
     cv.rectangle(x, y, w, h, grid_ink);
     int row = 0;

@@ -67,6 +67,7 @@ TEST(ReportPage, SweepPageListsItsPictures) {
         r.cm = -0.01;
         r.cl_momentum = 0.1 * a + 0.002;
         r.upper_bubble = a >= 8;
+        fs::create_directories(dir / r.folder);
         write_json_file(record_path(dir / r.folder), record_to_json(r));
         write_run_files(dir / r.folder, a);
     }
@@ -97,10 +98,12 @@ TEST(ReportPage, HtmlIsEscaped) {
 }
 
 TEST(PlotTicks, NiceSteps) {
-    const AxisTicks t = nice_ticks(-0.13, 1.07);
-    EXPECT_DOUBLE_EQ(t.step, 0.2);
-    EXPECT_DOUBLE_EQ(t.lo, -0.2);
-    EXPECT_NEAR(t.hi, 1.2, 1e-12);
+    // (0.93 + 0.13) / 5 = 0.212 per tick: the next nice step is 0.25, the range whole steps.
+    const AxisTicks t = nice_ticks(-0.13, 0.93, 5);
+    EXPECT_DOUBLE_EQ(t.step, 0.25);
+    EXPECT_DOUBLE_EQ(t.lo, -0.25);
+    EXPECT_DOUBLE_EQ(t.hi, 1.0);
+    EXPECT_EQ(t.values.size(), 6u);
     EXPECT_EQ(tick_label(0.4, 0.2), "0.4");
     EXPECT_EQ(tick_label(-4, 2), "-4");
     const AxisTicks d = decade_ticks(3e-7, 0.5);
@@ -142,17 +145,17 @@ TEST(PlotStreamlines, FollowTheStream) {
     const ImageGrid g = resample_frame(uniform_frame(), {0.0, 2.0, 0.0, 1.0}, 200);
     const std::vector<Streamline> lines = trace_streamlines(g);
     ASSERT_FALSE(lines.empty());
-    // Away from the no-slip bottom row every line is straight with slope v/u = 0.5 (y down in
-    // pixels): midpoint steps along a constant direction are exact to round-off.
+    // Every line is straight with slope v/u = 0.5 (y down in pixels): midpoint steps along a
+    // constant direction are exact to round-off. (The no-slip bottom row scales u and v alike,
+    // so it slows the stream there without turning it.) 1e-6 allows the bilinear round-off.
     int checked = 0;
     for (const Streamline& s : lines) {
-        if (s.y.front() > 80 || s.y.back() > 80) continue;
         const double dx = s.x.back() - s.x.front(), dy = s.y.back() - s.y.front();
         if (std::hypot(dx, dy) < 20) continue;
         EXPECT_NEAR(dy / dx, -0.5, 1e-6);
         ++checked;
     }
-    EXPECT_GT(checked, 3);
+    EXPECT_GE(checked, 6);  // the window holds 8 lines at this spacing
 }
 
 }  // namespace

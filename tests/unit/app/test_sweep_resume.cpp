@@ -9,7 +9,9 @@
 #include "app/sweep_point.hpp"
 #include "app/sweep_record.hpp"
 #include "app_test_support.hpp"
+#include "io/case_file.hpp"
 #include "io/json_writer.hpp"
+#include "io/output_dir.hpp"
 
 namespace veer {
 namespace {
@@ -26,7 +28,10 @@ PointRecord made_up_point(const SweepCase& sweep, double alpha) {
     return r;
 }
 
-void make_finished(const std::filesystem::path& sweep_dir, const PointRecord& r) {
+/// A point folder as a finished sweep leaves it, in a sweep folder stamped with the case.
+void make_finished(const std::filesystem::path& sweep_dir, const PointRecord& r,
+                   const std::filesystem::path& case_file) {
+    prepare_output_dir(sweep_dir, read_case_file(case_file).text, false);
     const auto dir = sweep_dir / r.folder;
     std::filesystem::create_directories(dir);
     write_json_file(dir / "summary.json", {{"cl", r.cl}});
@@ -38,7 +43,7 @@ TEST(SweepResume, FinishedPointIsFoundOnlyForTheSameCase) {
     test::write_text(tmp / "c.toml", test::tiny_case_text());
     SweepCase sweep{tmp / "c.toml", {}, 0, 0.0, false};
     const PointRecord r = made_up_point(sweep, 4.0);
-    make_finished(tmp / "sw", r);
+    make_finished(tmp / "sw", r, tmp / "c.toml");
     const auto dir = tmp / "sw" / r.folder;
     EXPECT_TRUE(finished_point(dir, point_case_text(sweep, 4.0)));
     // Another angle, another --set, or a lost summary.json: not finished.
@@ -59,7 +64,8 @@ TEST(SweepResume, SweepOfFinishedPointsRunsNothing) {
     o.alpha = "0:8:4";
     o.out_dir = tmp / "sw";
     o.quiet = true;
-    for (double a : {0.0, 4.0, 8.0}) make_finished(o.out_dir, made_up_point(sweep, a));
+    for (double a : {0.0, 4.0, 8.0})
+        make_finished(o.out_dir, made_up_point(sweep, a), o.input.case_file);
     ASSERT_EQ(run_sweep_command(o), 0);
     const CsvTable polar = CsvTable::read(o.out_dir / "polar.csv");
     ASSERT_EQ(polar.rows(), 3u);
@@ -79,7 +85,7 @@ TEST(SweepResume, GatherWritesThePolarOfWhatIsThere) {
     o.out_dir = tmp / "sw";
     o.quiet = true;
     o.gather = true;
-    make_finished(o.out_dir, made_up_point(sweep, 2.0));
+    make_finished(o.out_dir, made_up_point(sweep, 2.0), o.input.case_file);
     EXPECT_EQ(run_sweep_command(o), 1);  // two points are missing: not a whole polar
     const nlohmann::json s = read_json_file(o.out_dir / "summary.json");
     EXPECT_EQ(s["points"].get<int>(), 1);
