@@ -14,7 +14,10 @@ struct SpalartAllmarasSettings {
     double free_stream_ratio = 3.0;
     bool second_order_convection = true;  ///< van Leer deferred correction (else first order)
     int sweeps = 2;                       ///< line-relaxation sweeps per step
-    double time_step_scale = 1.0;         ///< steady: nu_tilde step = scale x flow's local step
+    /// Steady: nu_tilde's pseudo-time step = scale x the flow's local step. The nu_tilde step is
+    /// implicit and positivity-keeping, so it takes larger steps than the flow: 10 brought the
+    /// nu_tilde residual down about 3x faster than 1 on a NACA 0012 at Re 6e6 (192 x 64 cells).
+    double time_step_scale = 10.0;
     /// Off only in the transport-operator verification (manufactured solutions).
     bool model_sources = true;
     /// Value on prescribed-velocity faces (manufactured solutions); empty: 0 (moving walls).
