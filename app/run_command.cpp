@@ -1,6 +1,7 @@
 // `veer run`: a new run from a case file, or the continuation of one from its checkpoint.
 #include <fmt/format.h>
 
+#include <cstdio>
 #include <iostream>
 
 #include "app/commands.hpp"

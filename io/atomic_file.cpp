@@ -33,9 +33,10 @@ void commit_temporary(const fs::path& tmp, const fs::path& target) {
     std::error_code ec;
     fs::rename(tmp, target, ec);
     if (ec) {
+        const std::string why = ec.message();  // before remove() reuses ec
         fs::remove(tmp, ec);
         throw InputError(target.string() + ": cannot replace the file with its new version (" +
-                         tmp.string() + "): " + ec.message());
+                         tmp.string() + "): " + why);
     }
 }
 

@@ -2,6 +2,8 @@
 /// Shared helpers of the app tests: a scratch folder per test, small files written by hand.
 #include <gtest/gtest.h>
 
+#include <unistd.h>
+
 #include <filesystem>
 #include <fstream>
 #include <string>
@@ -14,7 +16,8 @@ public:
     AppScratch() {
         const auto* info = ::testing::UnitTest::GetInstance()->current_test_info();
         m_path = std::filesystem::temp_directory_path() /
-                 (std::string("veer_app_") + info->test_suite_name() + "_" + info->name());
+                 (std::string("veer_app_") + info->test_suite_name() + "_" + info->name() + "_" +
+                  std::to_string(::getpid()));
         std::filesystem::remove_all(m_path);
         std::filesystem::create_directories(m_path);
     }
