@@ -72,9 +72,6 @@ int run_run_command(const RunOptions& o) {
     } else {
         spec = read_case_file(o.input.case_file, o.input.overrides);
     }
-    if (spec.model != "laminar")
-        throw InputError(spec.path.string() + ": [flow] model = \"" + spec.model +
-                         "\" is not available in this build yet; use \"laminar\"");
     // A restart writes into its own run folder whatever the overrides did to the case text.
     std::error_code ec;
     const bool own_folder = checkpoint && std::filesystem::equivalent(out, restart_dir, ec);

@@ -35,6 +35,7 @@ SolverSettings solver_settings_for(const CaseSpec& spec) {
     s.pressure_solver = parse_pressure_solver_kind(spec.run.pressure_solver,
                                                    spec.path.string() + ": [run] pressure_solver");
     if (is_steady(spec) && spec.run.cfl > 0) s.pseudo_cfl = spec.run.cfl;
+    s.turbulence = turbulence_model_kind(spec.model);
     return s;
 }
 
