@@ -71,7 +71,8 @@ void draw_polar(const std::vector<PointRecord>& p, const PolarFigures& f, const 
 void draw_all_surfaces(const fs::path& sweep_dir, const std::vector<PointRecord>& p,
                        const fs::path& file, bool pressure) {
     Chart c;
-    c.title = pressure ? "Cp at each angle" : "Cf at each angle (upper solid, lower dashed)";
+    c.title = pressure ? "Cp at each angle (upper solid, lower dashed)"
+                       : "Cf at each angle (upper solid, lower dashed)";
     c.x_label = "x / c";
     c.y_label = pressure ? "Cp" : "Cf";
     c.y_reversed = pressure;

@@ -21,6 +21,7 @@ namespace {
 namespace fs = std::filesystem;
 
 constexpr double trailing_edge_zone = 0.95;  // x/c aft of which a separation is the TE's own
+constexpr long unsteady_step_guard = 1000000;
 
 const char* status_word(RunStatus s) {
     switch (s) {
@@ -105,10 +106,12 @@ RunPiece run_piece(const CaseSpec& spec, const StructuredGrid& grid, const fs::p
 void continue_unsteady(PointRecord& r, PointOutcome& out, const SweepCase& sweep, double alpha,
                        const StructuredGrid& grid, const fs::path& dir, const Simulation& steady,
                        const std::string& label) {
-    // The steady attempt's step cap does not apply: the case's own cap and end time do.
+    // A time-accurate point runs to its end time: the step cap of the steady attempt (the
+    // case's or --steady-steps) is lifted to a guard against runaway runs only.
     std::vector<std::string> o = sweep.overrides;
     o.push_back(fmt::format("flow.alpha={:.17g}", alpha));
     o.push_back("run.mode=\"unsteady\"");
+    o.push_back(fmt::format("run.steps={}", unsteady_step_guard));
     if (sweep.unsteady_time > 0)
         o.push_back(fmt::format("run.end_time={:.17g}", sweep.unsteady_time));
     const CaseSpec spec = read_case_file(sweep.case_file, o);
