@@ -73,7 +73,9 @@ def main():
     pv.ColorBy(lines, None)
     lines.AmbientColor = lines.DiffuseColor = [1.0, 1.0, 1.0]
     lines.LineWidth = 1.5
-    # The section is the hole in the grid; the near field from -0.6 to 1.9 chords.
+    # The first render places the camera around the whole grid; then it is moved to the near
+    # field (-0.6 to 1.9 chords across), where the section is the hole in the grid.
+    pv.Render(view)
     view.CameraPosition = [0.65, 0.0, 5.0]
     view.CameraFocalPoint = [0.65, 0.0, 0.0]
     view.CameraViewUp = [0.0, 1.0, 0.0]
