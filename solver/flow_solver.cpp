@@ -5,6 +5,7 @@
 #include <numbers>
 #include <sstream>
 
+#include "mesh/wall_distance.hpp"
 #include "solver/boundary_ghosts.hpp"
 #include "solver/face_flux.hpp"
 #include "solver/far_field_vortex.hpp"
@@ -54,6 +55,13 @@ FlowSolverCore::FlowSolverCore(const StructuredGrid& g, const FlowConditions& c,
     vortex_active = s.far_field_vortex && grid.c_layout().has_value();
     allocate();
     pressure_solver = make_pressure_solver(s.pressure_solver);
+    if (s.turbulence == TurbulenceModelKind::spalart_allmaras) {
+        // The model keeps pointers to geom, faces and connectivity: members of this heap object.
+        turbulence.emplace<SpalartAllmaras>(geom, faces, connectivity, wall_distance(grid, metrics),
+                                            nu, s.spalart_allmaras);
+        eddy_i.assign(geom.i_faces.area.size(), 0.0);
+        eddy_j.assign(geom.j_faces.area.size(), 0.0);
+    }
     FlowFields start;
     start.u.assign(geom.volume.size(), free_stream.x);
     start.v.assign(geom.volume.size(), free_stream.y);
@@ -193,7 +201,8 @@ FlowFields FlowSolver::fields() const {
     f.u = m_impl->vel.u.interior();
     f.v = m_impl->vel.v.interior();
     f.pressure = m_impl->pressure.interior();
-    f.eddy_viscosity.assign(f.u.size(), 0.0);
+    f.eddy_viscosity = eddy_viscosity(m_impl->turbulence, f.u.size());
+    f.nu_tilde = nu_tilde(m_impl->turbulence);
     return f;
 }
 

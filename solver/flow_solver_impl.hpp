@@ -13,6 +13,7 @@
 #include "solver/line_relaxation.hpp"
 #include "solver/momentum_system.hpp"
 #include "solver/pressure_solver.hpp"
+#include "solver/turbulence_model.hpp"
 
 namespace veer {
 
@@ -42,6 +43,8 @@ struct FlowSolverCore {
     MomentumSystem system;
     LineWork line_work;
     std::unique_ptr<PressureSolver> pressure_solver;
+    TurbulenceModel turbulence;          ///< Laminar, or a model holding nu_tilde
+    std::vector<double> eddy_i, eddy_j;  ///< face eddy viscosity of the current step
 
     double time = 0.0;
     double dt_previous = 0.0;
@@ -57,6 +60,7 @@ struct FlowSolverCore {
     void setup_uniform_pressure();
     StepReport step(double dt, bool steady);
     void update_vortex();
+    void advance_turbulence(double dt, bool steady, StepReport& r);
 };
 
 }  // namespace veer

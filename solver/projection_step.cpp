@@ -171,6 +171,11 @@ StepReport FlowSolverCore::step(double dt, bool steady) {
     in.time_diag = &time_diag;
     in.time_rhs_u = &time_rhs_u;
     in.time_rhs_v = &time_rhs_v;
+    if (has_eddy_viscosity(turbulence)) {
+        face_eddy_viscosity(turbulence, eddy_i, eddy_j);
+        in.eddy_i = &eddy_i;
+        in.eddy_j = &eddy_j;
+    }
     if (settings.body_force) {
         in.source_u = &source_u;
         in.source_v = &source_v;
@@ -205,6 +210,7 @@ StepReport FlowSolverCore::step(double dt, bool steady) {
     time = t_new;
     ++steps;
     if (vortex_active) update_vortex();
+    advance_turbulence(dt, steady, r);
     r.step = steps;
     r.time = time;
     r.time_step = dt;
@@ -219,6 +225,26 @@ StepReport FlowSolverCore::step(double dt, bool steady) {
     r.pressure_residual = ps.final_residual;
     r.circulation = circulation;
     return r;
+}
+
+void FlowSolverCore::advance_turbulence(double dt, bool steady, StepReport& r) {
+    if (!has_eddy_viscosity(turbulence)) return;
+    fill_velocity_ghosts(faces, connectivity, vel.u.view(), vel.v.view());
+    TurbulenceInputs in;
+    in.u = vel.u.view();
+    in.v = vel.v.view();
+    in.flux_i = &flux_i;
+    in.flux_j = &flux_j;
+    if (steady) in.local_dt = local_dt.view();
+    in.dt = dt;
+    in.steady = steady;
+    const TurbulenceReport t = advance(turbulence, in);
+    if (!t.finite && r.finite) {
+        r.finite = false;
+        r.worst_i = t.worst_i;
+        r.worst_j = t.worst_j;
+        r.worst_variable = "nu_tilde";
+    }
 }
 
 void FlowSolverCore::update_vortex() {

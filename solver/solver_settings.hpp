@@ -6,6 +6,7 @@
 #include "mesh/vec2.hpp"
 #include "solver/boundary_faces.hpp"
 #include "solver/pressure_solver.hpp"
+#include "solver/turbulence_model.hpp"
 
 namespace veer {
 
@@ -39,6 +40,10 @@ struct SolverSettings {
     bool far_field_vortex = true;     ///< Thomas & Salas 1986 point-vortex correction
     Vec2 vortex_center{0.25, 0.0};    ///< quarter chord (chords)
     double vortex_relaxation = 0.05;  ///< fraction of the lift-based update taken each step
+
+    // Turbulence model (turbulence_model.hpp): its eddy viscosity enters the momentum diffusion.
+    TurbulenceModelKind turbulence = TurbulenceModelKind::laminar;
+    SpalartAllmarasSettings spalart_allmaras;
 
     /// Per-segment velocity prescriptions (manufactured solutions, moving lids).
     std::vector<VelocityOverride> velocity_overrides;

@@ -29,7 +29,7 @@ const NamedArray& find_array(const std::vector<NamedArray>& state, const std::st
 
 std::vector<NamedArray> FlowSolver::state() const {
     const FlowSolverCore& s = *m_impl;
-    return {
+    std::vector<NamedArray> out = {
         {"velocity_u", s.vel.u.interior()},
         {"velocity_v", s.vel.v.interior()},
         {"velocity_u_previous", s.vel_old.u.interior()},
@@ -42,6 +42,8 @@ std::vector<NamedArray> FlowSolver::state() const {
         {"local_time_step", s.local_dt.interior()},
         {"clock", {s.time, static_cast<double>(s.steps), s.dt_previous, s.circulation}},
     };
+    if (has_eddy_viscosity(s.turbulence)) out.push_back({"nu_tilde", nu_tilde(s.turbulence)});
+    return out;
 }
 
 void FlowSolver::restore(const std::vector<NamedArray>& state) {
@@ -62,6 +64,8 @@ void FlowSolver::restore(const std::vector<NamedArray>& state) {
     s.steps = static_cast<long>(clock[1]);
     s.dt_previous = clock[2];
     s.circulation = clock[3];
+    if (auto* sa = std::get_if<SpalartAllmaras>(&s.turbulence))
+        sa->set_nu_tilde(find_array(state, "nu_tilde", n).values);
     if (s.settings.mode == TimeMode::steady) {
         // Rebuild the face steps and Poisson set-up from the stored local steps, as the
         // uninterrupted run built them at its last renewal.

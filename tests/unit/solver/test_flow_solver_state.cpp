@@ -83,6 +83,30 @@ TEST_P(Restart, InterruptedRunGivesTheSameBitsAsAnUninterruptedOne) {
 INSTANTIATE_TEST_SUITE_P(BothModes, Restart,
                          ::testing::Values(TimeMode::steady, TimeMode::time_accurate));
 
+TEST(Restart, TurbulenceModelStateIsPartOfTheRestart) {
+    // A flat plate (wall on j_min, where the wall distance expects it) in a free stream.
+    StructuredGrid g = cavity();
+    g.segments() = {{Side::i_min, 0, 16, SegmentKind::far_field, "inlet"},
+                    {Side::i_max, 0, 16, SegmentKind::outflow, "outlet"},
+                    {Side::j_min, 0, 16, SegmentKind::wall, "plate"},
+                    {Side::j_max, 0, 16, SegmentKind::far_field, "top"}};
+    SolverSettings s;
+    s.mode = TimeMode::steady;
+    s.local_step_interval = 7;
+    s.turbulence = TurbulenceModelKind::spalart_allmaras;
+    FlowSolver whole(g, {1e5, 0.0}, s);
+    step(whole, TimeMode::steady, 20);
+    FlowSolver first(g, {1e5, 0.0}, s);
+    step(first, TimeMode::steady, 8);
+    FlowSolver second(g, {1e5, 0.0}, s);
+    second.restore(first.state());
+    step(second, TimeMode::steady, 12);
+    expect_same_bits(whole.fields(), second.fields());
+    const FlowFields a = whole.fields(), b = second.fields();
+    ASSERT_EQ(a.nu_tilde.size(), 256u);
+    for (std::size_t k = 0; k < a.nu_tilde.size(); ++k) EXPECT_EQ(a.nu_tilde[k], b.nu_tilde[k]);
+}
+
 TEST(Restart, MissingArrayIsAnInputErrorNamingIt) {
     FlowSolver s(cavity(), {100.0, 0.0}, settings(TimeMode::steady));
     std::vector<NamedArray> state = s.state();
