@@ -146,6 +146,7 @@ int run_sweep(const SweepOptions& o, const SweepRanks& ranks) {
                 records.push_back(*r);
         return write_polar(o.out_dir, records, angles);
     }
+    const std::vector<std::size_t> mine_points = points_to_run(o, angles.size(), ranks);
     MeshBuild mesh = build_mesh(base);
     if (ranks.is_root()) {
         for (const std::string& w : mesh.quality.warnings) fmt::print("mesh warning: {}\n", w);
@@ -153,8 +154,7 @@ int run_sweep(const SweepOptions& o, const SweepRanks& ranks) {
                    mesh.grid.ni(), mesh.grid.nj(), base.flow.reynolds, angles.size(), ranks.size(),
                    ranks.size() > 1 ? "es" : "");
     }
-    const BlockResult mine =
-        run_block(o, sweep, angles, points_to_run(o, angles.size(), ranks), mesh.grid);
+    const BlockResult mine = run_block(o, sweep, angles, mine_points, mesh.grid);
     const bool interrupted = ranks.any(mine.interrupted);
     const std::vector<std::string> texts = ranks.gather_on_root(records_text(mine.records));
     if (!ranks.is_root()) return interrupted ? 130 : 0;
