@@ -19,8 +19,11 @@ std::vector<ChartMark> polar_marks(const PolarFigures& f) {
     if (f.alpha_separation_onset)
         marks.push_back({*f.alpha_separation_onset,
                          fmt::format("separation onset {:g}°", *f.alpha_separation_onset)});
-    if (f.alpha_cl_max && f.stall_in_range)
-        marks.push_back({*f.alpha_cl_max, fmt::format("Cl max {:g}°", *f.alpha_cl_max)});
+    // Cl max is marked as the stall angle only when Cl falls again beyond it.
+    if (f.alpha_cl_max)
+        marks.push_back(
+            {*f.alpha_cl_max, fmt::format("{} {:g}°", f.stall_in_range ? "stall, Cl max" : "Cl max",
+                                          *f.alpha_cl_max)});
     return marks;
 }
 

@@ -170,21 +170,34 @@ void draw_legend(Canvas& cv, const Chart& c, const Frame& f) {
     }
 }
 
+/// Mark labels last, on white, along the bottom of the plot (the legend keeps the top): those on
+/// the right half read leftwards, and each mark has its own row.
+void draw_mark_labels(Canvas& cv, const Chart& c, const Frame& f) {
+    for (std::size_t k = 0; k < c.marks.size(); ++k) {
+        const ChartMark& m = c.marks[k];
+        const double x = f.px(m.x), y = f.top + f.height - 10 - 16.0 * static_cast<double>(k);
+        const bool right_half = x > f.left + 0.5 * f.width;
+        const double w = cv.text_width(m.label, 11) + 6;
+        cv.fill_rectangle(right_half ? x - 2 - w : x + 2, y - 11, w, 15, {1, 1, 1});
+        cv.text(m.label, right_half ? x - 5 : x + 5, y, 11,
+                right_half ? TextAnchor::right : TextAnchor::left, mark_ink);
+    }
+}
+
 }  // namespace
 
 void write_chart(const Chart& chart, const std::filesystem::path& path, int width, int height) {
     Canvas cv(path, width, height);
     const Frame f = make_frame(chart, width, height);
     draw_axes(cv, chart, f);
-    for (const ChartMark& m : chart.marks) {
+    for (const ChartMark& m : chart.marks)
         cv.line(f.px(m.x), f.top, f.px(m.x), f.top + f.height, mark_ink, 1.2, true);
-        cv.text(m.label, f.px(m.x) + 4, f.top + 14, 11, TextAnchor::left, mark_ink);
-    }
     for (std::size_t k = 0; k < chart.series.size(); ++k) {
         const ChartSeries& s = chart.series[k];
         draw_series(cv, s, series_colour(s.colour >= 0 ? s.colour : static_cast<int>(k)), f);
     }
     draw_legend(cv, chart, f);
+    draw_mark_labels(cv, chart, f);
     cv.finish();
 }
 
