@@ -77,6 +77,18 @@ std::optional<double> momentum_lift(const fs::path& run_dir) {
     return best;
 }
 
+/// Time means, amplitudes and Strouhal number of a time-accurate run into the record.
+void take_cycle_statistics(PointRecord& r, const UnsteadyStats& st) {
+    r.cl = st.cl_mean;
+    r.cd = st.cd_mean;
+    r.cm = st.cm_mean;
+    r.cl_amplitude = st.cl_amplitude;
+    r.cd_amplitude = st.cd_amplitude;
+    r.cm_amplitude = st.cm_amplitude;
+    r.cycles = st.cycles;
+    r.strouhal = st.strouhal;
+}
+
 ForceRecord read_force_record(const fs::path& history) {
     const CsvTable t = CsvTable::read(history);
     return {t.numbers("time"), t.numbers("cl"), t.numbers("cd"), t.numbers("cm")};
@@ -136,11 +148,7 @@ void continue_unsteady(PointRecord& r, PointOutcome& out, const SweepCase& sweep
     const ForceRecord history = read_force_record(dir / "unsteady" / "history.csv");
     if (history.time.size() >= 4) {
         const UnsteadyStats st = unsteady_stats(history);
-        r.cl = st.cl_mean, r.cd = st.cd_mean, r.cm = st.cm_mean;
-        r.cl_amplitude = st.cl_amplitude, r.cd_amplitude = st.cd_amplitude;
-        r.cm_amplitude = st.cm_amplitude;
-        r.cycles = st.cycles;
-        r.strouhal = st.strouhal;
+        take_cycle_statistics(r, st);
         if (!st.periodic) {
             r.regime = "steady";
             r.note +=
@@ -213,11 +221,7 @@ PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const Structu
                 if (history.time.size() >= 4) {
                     const UnsteadyStats st = unsteady_stats(history);
                     r.regime = st.periodic ? "unsteady" : "steady";
-                    r.cl = st.cl_mean, r.cd = st.cd_mean, r.cm = st.cm_mean;
-                    r.cl_amplitude = st.cl_amplitude, r.cd_amplitude = st.cd_amplitude;
-                    r.cm_amplitude = st.cm_amplitude;
-                    r.cycles = st.cycles;
-                    r.strouhal = st.strouhal;
+                    take_cycle_statistics(r, st);
                 }
             }
             break;
