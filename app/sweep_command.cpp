@@ -126,9 +126,6 @@ int write_polar(const fs::path& dir, const std::vector<PointRecord>& records,
 int run_sweep(const SweepOptions& o, const SweepRanks& ranks) {
     const std::vector<double> angles = parse_sweep_angles(o.alpha, o.down);
     const CaseSpec base = read_case_file(o.input.case_file, o.input.overrides);
-    if (base.model != "laminar")
-        throw InputError(base.path.string() + ": [flow] model = \"" + base.model +
-                         "\" is not available in this build yet; use \"laminar\"");
     SweepCase sweep{fs::absolute(o.input.case_file), o.input.overrides, o.steady_steps,
                     o.unsteady_time, !o.quiet};
     if (ranks.is_root()) {
