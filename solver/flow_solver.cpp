@@ -174,6 +174,9 @@ void FlowSolver::initialize(const FlowFields& initial) {
     s.vel.u.set_interior(initial.u);
     s.vel.v.set_interior(initial.v);
     s.pressure.set_interior(initial.pressure);
+    // A sweep's next point starts from the last one's nu_tilde too (where the fields have it).
+    if (auto* sa = std::get_if<SpalartAllmaras>(&s.turbulence); sa && !initial.nu_tilde.empty())
+        sa->set_nu_tilde(initial.nu_tilde);
     s.reset_history();
 }
 

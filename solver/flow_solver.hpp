@@ -31,7 +31,10 @@ struct StepReport {
     int pressure_iterations = 0;
     double pressure_residual = 0.0;  ///< relative residual of the pressure solve
     double circulation = 0.0;        ///< far-field vortex circulation after the step
-    bool finite = true;              ///< every value of u, v, p is finite
+    /// Turbulence model: rms over the cells of (nu_tilde_new - nu_tilde) / dt, nu_tilde per time
+    /// unit (0 when laminar), for the convergence monitor.
+    double residual_nu_tilde = 0.0;
+    bool finite = true;  ///< every value of u, v, p is finite
     /// The first non-finite value (cells in memory order) when !finite, else the cell with the
     /// largest momentum residual; variable is "u", "v" or "pressure".
     int worst_i = 0;
@@ -49,7 +52,8 @@ public:
     FlowSolver(const FlowSolver&) = delete;
     FlowSolver& operator=(const FlowSolver&) = delete;
 
-    /// Replaces u, v, p (cell values) and restarts the history: time 0, step 0, first step BDF1,
+    /// Replaces u, v, p (cell values; and nu_tilde where `initial` has it and a turbulence model
+    /// runs) and restarts the history: time 0, step 0, first step BDF1,
     /// face fluxes interpolated from the new velocity.
     void initialize(const FlowFields& initial);
 

@@ -239,6 +239,7 @@ void FlowSolverCore::advance_turbulence(double dt, bool steady, StepReport& r) {
     in.dt = dt;
     in.steady = steady;
     const TurbulenceReport t = advance(turbulence, in);
+    r.residual_nu_tilde = t.residual;
     if (!t.finite && r.finite) {
         r.finite = false;
         r.worst_i = t.worst_i;

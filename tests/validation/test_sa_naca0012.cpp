@@ -1,0 +1,139 @@
+/// Spalart-Allmaras validation: NACA 0012 at Re = 6e6, alpha = 0, 10 and 15 degrees, fully
+/// turbulent, against the NASA Turbulence Modeling Resource "2D NACA 0012 Airfoil Validation
+/// Case" SA results of seven independent codes on its 897 x 257 grid [P] (band and mean in
+/// ../shared/reference/tmr_naca0012_sa.md).
+///
+/// Differences from the resource's case, stated rather than absorbed in the tolerances:
+/// - Mach number: the resource runs M = 0.15 ("essentially incompressible"); veer is
+///   incompressible. Our Cl is scaled by the Prandtl-Glauert factor 1 / sqrt(1 - 0.15^2) =
+///   1.0114 before the comparison (a small-angle correction, applied at every angle); Cd is
+///   compared as it is.
+/// - Geometry: the published NACA 0012 with the closed trailing edge (last coefficient -0.1036),
+///   as trailing_edge = "closed" gives it; the resource closes the section sharply at
+///   x = 1.00893 and rescales it to unit chord.
+/// - Grid: 384 surface cells, 64 on each side of the wake, 160 wall-normal (512 x 160), first
+///   cell for y+ = 1 from the flat-plate correlation, far field 100 chords with the point-vortex
+///   correction (Thomas & Salas 1986). The issue's 256-surface-cell benchmark grid gives Cd
+///   5.3% above the band's top at 15 degrees (0.02273; pressure drag, too few cells round the
+///   suction peak), so the check uses this finer one. About 3.5 minutes per angle on the
+///   loaded 2-core machine: labelled validation, not run by default.
+#include <gtest/gtest.h>
+
+#include <algorithm>
+#include <chrono>
+#include <cmath>
+#include <deque>
+#include <iostream>
+
+#include "mesh/cgrid.hpp"
+#include "mesh/grid_metrics.hpp"
+#include "mesh/naca.hpp"
+#include "mesh/section_builder.hpp"
+#include "mesh/surface_sampling.hpp"
+#include "mesh/wall_spacing.hpp"
+#include "postprocess/surface_forces.hpp"
+#include "solver/flow_solver.hpp"
+
+namespace veer {
+namespace {
+
+constexpr double reynolds = 6e6;
+const double prandtl_glauert = 1.0 / std::sqrt(1.0 - 0.15 * 0.15);
+
+StructuredGrid benchmark_grid() {
+    CGridSpec spec;
+    spec.around = 384;
+    spec.wake = 64;
+    spec.normal = 160;
+    spec.far_field = 100.0;
+    spec.first_cell = first_cell_for_y_plus(1.0, reynolds);
+    const Section section = make_section(naca_outline("0012", TrailingEdge::closed), "NACA 0012");
+    return generate_cgrid(sample_surface(section, spec.around), spec);
+}
+
+struct AirfoilResult {
+    bool converged = false;
+    long steps = 0;
+    double seconds = 0.0;
+    SurfaceForces forces;
+};
+
+/// Steady run to the criteria of `veer run`'s monitor: every residual (u, v, continuity,
+/// nu_tilde) 1e-6 of its reference (the largest of the first 20 steps), and Cl, Cd changed by
+/// less than 1e-5 over the last 100 steps.
+AirfoilResult run_airfoil(const StructuredGrid& grid, double alpha, long max_steps) {
+    SolverSettings s;
+    s.mode = TimeMode::steady;
+    s.turbulence = TurbulenceModelKind::spalart_allmaras;
+    const FlowConditions conditions{reynolds, alpha};
+    const auto start = std::chrono::steady_clock::now();
+    FlowSolver solver(grid, conditions, s);
+    const GridMetrics metrics = compute_metrics(grid);
+    AirfoilResult out;
+    double reference[4] = {0.0, 0.0, 0.0, 0.0};
+    std::deque<double> cl, cd;
+    for (long n = 0; n < max_steps && !out.converged; ++n) {
+        const StepReport r = solver.advance_pseudo_time();
+        if (!r.finite) break;
+        const double res[4] = {r.residual_u, r.residual_v, r.residual_continuity,
+                               r.residual_nu_tilde};
+        double worst = 0.0;
+        for (int k = 0; k < 4; ++k) {
+            if (n < 20) reference[k] = std::max(reference[k], res[k]);
+            worst = std::max(worst, res[k] / reference[k]);
+        }
+        out.forces = integrate_surface_forces(grid, metrics, solver.fields(), conditions);
+        cl.push_back(out.forces.cl.total);
+        cd.push_back(out.forces.cd.total);
+        if (cl.size() > 101) cl.pop_front(), cd.pop_front();
+        auto spread = [](const std::deque<double>& d) {
+            const auto [lo, hi] = std::minmax_element(d.begin(), d.end());
+            return *hi - *lo;
+        };
+        out.steps = n + 1;
+        out.converged =
+            n >= 20 && worst < 1e-6 && cl.size() == 101 && std::max(spread(cl), spread(cd)) < 1e-5;
+    }
+    out.seconds = std::chrono::duration<double>(std::chrono::steady_clock::now() - start).count();
+    return out;
+}
+
+struct TmrBand {
+    double alpha, cl_lo, cl_hi, cd_lo, cd_hi;
+};
+
+// NASA TMR NACA 0012 validation case, SA, seven codes on 897 x 257 [P] (tmr_naca0012_sa.md).
+constexpr TmrBand tmr_bands[] = {
+    {0.0, 0.0, 0.0, 0.00812, 0.00830},
+    {10.0, 1.0891, 1.1000, 0.01225, 0.01245},
+    {15.0, 1.5446, 1.5642, 0.02073, 0.02159},
+};
+
+TEST(SaNaca0012, LiftAndDragWithinTmrBands) {
+    const StructuredGrid grid = benchmark_grid();
+    for (const TmrBand& b : tmr_bands) {
+        const AirfoilResult r = run_airfoil(grid, b.alpha, 8000);
+        const double cl = prandtl_glauert * r.forces.cl.total, cd = r.forces.cd.total;
+        std::cout << "NACA 0012 Re 6e6 alpha " << b.alpha << ": " << r.steps << " steps, "
+                  << r.seconds << " s, Cl " << r.forces.cl.total << " (x 1.0114 = " << cl
+                  << "; TMR " << b.cl_lo << "-" << b.cl_hi << "), Cd " << cd << " (pressure "
+                  << r.forces.cd.pressure << ", friction " << r.forces.cd.friction << "; TMR "
+                  << b.cd_lo << "-" << b.cd_hi << "), Cm " << r.forces.cm.total << "\n";
+        EXPECT_TRUE(r.converged) << "alpha " << b.alpha;
+        // The issue's bands: Cl within 2% of the TMR band, Cd within 5%. At alpha = 0 the lift
+        // of a symmetric section is zero: |Cl| < 0.002, 2% of the lift of one degree (slope
+        // 0.1075 per degree at Re 6e6, McCroskey 1987, NASA TM-100019, as tmr_naca0012_sa.md
+        // derives it).
+        if (b.alpha == 0.0) {
+            EXPECT_LT(std::abs(cl), 0.002);
+        } else {
+            EXPECT_GE(cl, 0.98 * b.cl_lo) << "alpha " << b.alpha;
+            EXPECT_LE(cl, 1.02 * b.cl_hi) << "alpha " << b.alpha;
+        }
+        EXPECT_GE(cd, 0.95 * b.cd_lo) << "alpha " << b.alpha;
+        EXPECT_LE(cd, 1.05 * b.cd_hi) << "alpha " << b.alpha;
+    }
+}
+
+}  // namespace
+}  // namespace veer
