@@ -2,6 +2,8 @@
 
 #include <sstream>
 
+#include "io/markup_escape.hpp"
+
 namespace veer {
 namespace {
 
@@ -15,12 +17,12 @@ figure img{max-width:100%;border:1px solid #ddd}figcaption{font-size:.85em;color
 
 void write_table(std::ostringstream& out, const ReportTable& t) {
     out << "<table>\n";
-    if (!t.caption.empty()) out << "<caption>" << html_escape(t.caption) << "</caption>\n";
+    if (!t.caption.empty()) out << "<caption>" << markup_escaped(t.caption) << "</caption>\n";
     for (std::size_t r = 0; r < t.rows.size(); ++r) {
         const char* tag = r == 0 ? "th" : "td";
         out << "<tr>";
         for (const std::string& c : t.rows[r])
-            out << "<" << tag << ">" << html_escape(c) << "</" << tag << ">";
+            out << "<" << tag << ">" << markup_escaped(c) << "</" << tag << ">";
         out << "</tr>\n";
     }
     out << "</table>\n";
@@ -28,41 +30,19 @@ void write_table(std::ostringstream& out, const ReportTable& t) {
 
 }  // namespace
 
-std::string html_escape(const std::string& text) {
-    std::string out;
-    for (char c : text) {
-        switch (c) {
-            case '&':
-                out += "&amp;";
-                break;
-            case '<':
-                out += "&lt;";
-                break;
-            case '>':
-                out += "&gt;";
-                break;
-            case '"':
-                out += "&quot;";
-                break;
-            default:
-                out += c;
-        }
-    }
-    return out;
-}
-
 std::string render_report_html(const ReportPage& page) {
     std::ostringstream out;
     out << "<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n<title>"
-        << html_escape(page.title) << "</title>\n<style>" << style << "</style>\n</head>\n<body>\n"
-        << "<h1>" << html_escape(page.title) << "</h1>\n";
+        << markup_escaped(page.title) << "</title>\n<style>" << style
+        << "</style>\n</head>\n<body>\n"
+        << "<h1>" << markup_escaped(page.title) << "</h1>\n";
     for (const ReportSection& s : page.sections) {
-        out << "<h2>" << html_escape(s.heading) << "</h2>\n";
-        for (const std::string& p : s.paragraphs) out << "<p>" << html_escape(p) << "</p>\n";
+        out << "<h2>" << markup_escaped(s.heading) << "</h2>\n";
+        for (const std::string& p : s.paragraphs) out << "<p>" << markup_escaped(p) << "</p>\n";
         for (const ReportTable& t : s.tables) write_table(out, t);
         for (const ReportPicture& p : s.pictures)
-            out << "<figure><img src=\"" << html_escape(p.file) << "\" alt=\""
-                << html_escape(p.caption) << "\"><figcaption>" << html_escape(p.caption)
+            out << "<figure><img src=\"" << markup_escaped(p.file) << "\" alt=\""
+                << markup_escaped(p.caption) << "\"><figcaption>" << markup_escaped(p.caption)
                 << "</figcaption></figure>\n";
     }
     out << "</body>\n</html>\n";

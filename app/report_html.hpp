@@ -29,7 +29,4 @@ struct ReportPage {
 /// The page as HTML text.
 std::string render_report_html(const ReportPage& page);
 
-/// Text made safe for HTML (&, <, >, ").
-std::string html_escape(const std::string& text);
-
 }  // namespace veer

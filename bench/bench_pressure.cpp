@@ -19,6 +19,7 @@
 #include <string>
 #include <vector>
 
+#include "app/wait_policy.hpp"
 #include "mesh/cgrid.hpp"
 #include "mesh/grid_metrics.hpp"
 #include "mesh/naca.hpp"
@@ -160,6 +161,7 @@ void print_ratio(const Timing& ref, const Timing& mg) {
 }  // namespace
 
 int main(int argc, char** argv) {
+    veer::restart_with_passive_waits(argv);
     const Options o = parse(argc, argv);
     std::setvbuf(stdout, nullptr, _IOLBF, 0);  // line by line, also into a file
     std::printf("pressure solve to relative residual 1e-8, %d OpenMP threads, best of %d\n",

@@ -10,6 +10,7 @@
 
 #include "app/mesh_pipeline.hpp"
 #include "app/simulation.hpp"
+#include "app/wait_policy.hpp"
 #include "io/case_file.hpp"
 #include "solver/flow_solver.hpp"
 
@@ -74,7 +75,8 @@ void steady_to_convergence() {
 
 }  // namespace
 
-int main() {
+int main(int, char** argv) {
+    veer::restart_with_passive_waits(argv);
     const veer::StructuredGrid small = veer::build_mesh(grid_case(256, 64, 2e-3)).grid;
     const veer::StructuredGrid large = veer::build_mesh(grid_case(512, 128, 1e-3)).grid;
     fmt::print(

@@ -8,6 +8,7 @@
 #include <sstream>
 
 #include "io/atomic_file.hpp"
+#include "io/markup_escape.hpp"
 #include "mesh/errors.hpp"
 #include "postprocess/vorticity.hpp"
 
@@ -44,29 +45,6 @@ std::string attribute(const std::string& tag, const std::string& name) {
         if (end != std::string::npos) return tag.substr(begin, end - begin);
     }
     return {};
-}
-
-std::string xml_escaped(const std::string& s) {
-    std::string out;
-    for (char c : s) {
-        switch (c) {
-            case '&':
-                out += "&amp;";
-                break;
-            case '"':
-                out += "&quot;";
-                break;
-            case '<':
-                out += "&lt;";
-                break;
-            case '>':
-                out += "&gt;";
-                break;
-            default:
-                out += c;
-        }
-    }
-    return out;
 }
 
 }  // namespace
@@ -153,7 +131,7 @@ void FieldSeries::write_pvd() const {
         "  <Collection>\n";
     for (const SeriesFrame& f : m_frames)
         text += "    <DataSet timestep=\"" + exact_text(f.time) + "\" part=\"0\" file=\"" +
-                xml_escaped(f.file) + "\"/>\n";
+                markup_escaped(f.file) + "\"/>\n";
     text += "  </Collection>\n</VTKFile>\n";
     write_text_atomically(pvd_path(), text);
 }

@@ -93,10 +93,6 @@ TEST(ReportPage, RunPageListsItsPictures) {
     for (const std::string& p : pics) EXPECT_TRUE(test::is_png(tmp / p)) << p;
 }
 
-TEST(ReportPage, HtmlIsEscaped) {
-    EXPECT_EQ(html_escape("a<b & \"c\">"), "a&lt;b &amp; &quot;c&quot;&gt;");
-}
-
 TEST(PlotTicks, NiceSteps) {
     // (0.93 + 0.13) / 5 = 0.212 per tick: the next nice step is 0.25, the range whole steps.
     const AxisTicks t = nice_ticks(-0.13, 0.93, 5);
