@@ -38,6 +38,11 @@ CLI::App* add_sweep_subcommand(CLI::App& app, SweepOptions& o) {
         ->add_option("--unsteady-time", o.unsteady_time,
                      "end time (chords / free-stream speed) of time-accurate points")
         ->check(CLI::PositiveNumber);
+    sweep
+        ->add_option("--stability-time", o.stability_time,
+                     "length of the disturbed time-accurate check of converged separated points "
+                     "(chords / free-stream speed; 0: no check)")
+        ->check(CLI::NonNegativeNumber);
     sweep->add_flag("--force", o.force, "write into a folder that holds another study");
     sweep->add_flag("-q,--quiet", o.quiet, "no live progress line");
     return sweep;

@@ -163,6 +163,9 @@ RunResult Simulation::run() {
             res.status = RunStatus::converged;
             break;
         }
+        if (steady && m_options.stop_steady &&
+            m_options.stop_steady(m_monitor.relative_residual(), res.forces.cl.total))
+            break;
     }
     progress.finish();
     if (res.status != RunStatus::diverged) {

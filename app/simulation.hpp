@@ -3,6 +3,7 @@
 /// criteria (convergence, step cap, end time), divergence checks, the history, field frames and
 /// checkpoints. The solver only steps.
 #include <filesystem>
+#include <functional>
 #include <memory>
 #include <string>
 
@@ -33,6 +34,9 @@ struct RunResult {
 struct SimulationOptions {
     bool progress = true;  ///< live progress line on stderr
     std::string label;     ///< prefix of the progress line (e.g. a sweep point)
+    /// Steady runs: asked after every step with the largest relative residual and Cl; true ends
+    /// the run there (status step_cap), e.g. when a sweep sees the iteration stall.
+    std::function<bool(double relative_residual, double cl)> stop_steady;
 };
 
 class Simulation {

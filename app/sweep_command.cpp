@@ -128,6 +128,7 @@ int run_sweep(const SweepOptions& o, const SweepRanks& ranks) {
     const CaseSpec base = read_case_file(o.input.case_file, o.input.overrides);
     SweepCase sweep{fs::absolute(o.input.case_file), o.input.overrides, o.steady_steps,
                     o.unsteady_time, !o.quiet};
+    sweep.stability_time = o.stability_time;
     if (ranks.is_root()) {
         prepare_output_dir(o.out_dir, base.text, o.force);
         write_sweep_plan(o.out_dir, {sweep.case_file, sweep.overrides, angles, o.steady_steps,

@@ -3,11 +3,14 @@
 #include <fmt/format.h>
 
 #include <cmath>
+#include <memory>
 
 #include "app/report_csv.hpp"
+#include "app/residual_plateau.hpp"
 #include "app/run_report.hpp"
 #include "app/simulation.hpp"
 #include "app/sweep_angles.hpp"
+#include "app/sweep_stability.hpp"
 #include "app/sweep_unsteady_stats.hpp"
 #include "io/case_file.hpp"
 #include "io/checkpoint.hpp"
@@ -97,6 +100,7 @@ ForceRecord read_force_record(const fs::path& history) {
 struct RunPiece {
     RunResult result;
     std::unique_ptr<Simulation> sim;
+    bool stalled = false;  ///< a steady piece ended early: its residual stopped falling
 };
 
 RunPiece run_piece(const CaseSpec& spec, const StructuredGrid& grid, const fs::path& dir,
@@ -106,9 +110,19 @@ RunPiece run_piece(const CaseSpec& spec, const StructuredGrid& grid, const fs::p
     options.progress = sweep.progress;
     options.label = label;
     RunPiece p;
+    std::shared_ptr<ResidualPlateau> plateau;
+    if (spec.run.mode == "steady" && sweep.plateau.window > 0) {
+        PlateauCriteria c = sweep.plateau;
+        c.force_tolerance = spec.run.force_tolerance;
+        plateau = std::make_shared<ResidualPlateau>(c);
+        options.stop_steady = [plateau](double relative_residual, double cl) {
+            return plateau->add(relative_residual, cl);
+        };
+    }
     p.sim = std::make_unique<Simulation>(spec, grid, dir, options);
     if (start) p.sim->start_from(*start);
     p.result = p.sim->run();
+    p.stalled = plateau && plateau->stalled() && p.result.status == RunStatus::step_cap;
     if (p.result.status != RunStatus::diverged && p.result.status != RunStatus::interrupted)
         write_run_report(*p.sim, p.result);
     return p;
@@ -161,6 +175,51 @@ void continue_unsteady(PointRecord& r, PointOutcome& out, const SweepCase& sweep
     out.fields = p.sim->solver().fields();
 }
 
+/// Whether the upper surface of a steady point has separated ahead of the trailing-edge zone
+/// (the separation-onset criterion of the polar).
+bool upper_surface_separated(const PointRecord& r) {
+    return r.upper_bubble || (r.trailing_edge_separation_upper &&
+                              *r.trailing_edge_separation_upper < trailing_edge_zone);
+}
+
+/// The short time-accurate check of a converged point (app/sweep_stability.hpp); continues the
+/// point time-accurately when the flow does not keep the steady solution.
+void check_stability(PointRecord& r, PointOutcome& out, const SweepCase& sweep, double alpha,
+                     const StructuredGrid& grid, const fs::path& dir, const Simulation& steady,
+                     const std::string& label) {
+    std::vector<std::string> o = sweep.overrides;
+    o.push_back(fmt::format("flow.alpha={:.17g}", alpha));
+    o.push_back("run.mode=\"unsteady\"");
+    o.push_back(fmt::format("run.steps={}", unsteady_step_guard));
+    o.push_back(fmt::format("run.end_time={:.17g}", sweep.stability_time));
+    const CaseSpec spec = read_case_file(sweep.case_file, o);
+    const FlowFields from = disturbed(steady.solver().fields(), steady.metrics());
+    RunPiece p = run_piece(spec, grid, dir / "stability", &from, sweep, label + "stability ");
+    r.iterations += p.result.steps;
+    r.wall_seconds += p.result.wall_seconds;
+    if (p.result.status == RunStatus::interrupted) {
+        out.interrupted = true;
+        return;
+    }
+    if (p.result.status == RunStatus::diverged) {
+        r.note = "the time-accurate stability check diverged (the steady result is kept): " +
+                 p.result.diagnosis;
+        return;
+    }
+    const StabilityVerdict v =
+        judge_disturbance(read_force_record(dir / "stability" / "history.csv"), r.cl);
+    const std::string figures = fmt::format(
+        "a disturbed time-accurate check of {:g} time units: lift disturbance {:.2e} over its "
+        "second quarter, {:.2e} over its last",
+        sweep.stability_time, v.early, v.late);
+    if (!v.unstable) {
+        r.note = "steady solution kept by " + figures;
+        return;
+    }
+    r.note = "the steady solution is not kept (" + figures + ")";
+    continue_unsteady(r, out, sweep, alpha, grid, dir, *p.sim, label);
+}
+
 }  // namespace
 
 std::vector<std::string> point_overrides(const SweepCase& sweep, double alpha) {
@@ -201,8 +260,15 @@ PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const Structu
             return out;
         case RunStatus::step_cap:
             if (steady_mode) {
-                r.note = fmt::format("the steady iteration did not settle in {} iterations",
-                                     spec.run.steps);
+                r.note =
+                    p.stalled
+                        ? fmt::format(
+                              "the steady iteration stalled (its residual fell less than "
+                              "{:g} times over {} iterations while Cl kept moving) after "
+                              "{} iterations",
+                              sweep.plateau.required_drop, sweep.plateau.window, p.result.steps)
+                        : fmt::format("the steady iteration did not settle in {} iterations",
+                                      spec.run.steps);
                 continue_unsteady(r, out, sweep, alpha, grid, dir, *p.sim, label);
                 if (out.interrupted) return out;
                 break;
@@ -215,6 +281,11 @@ PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const Structu
             r.cl_momentum = momentum_lift(dir);
             add_separation(r, *p.sim);
             out.fields = p.sim->solver().fields();
+            if (steady_mode && p.result.status == RunStatus::converged &&
+                sweep.stability_time > 0 && upper_surface_separated(r)) {
+                check_stability(r, out, sweep, alpha, grid, dir, *p.sim, label);
+                if (out.interrupted) return out;
+            }
             if (!steady_mode) {
                 // A time-accurate case: every point is averaged like an unsteady one.
                 const ForceRecord history = read_force_record(dir / "history.csv");

@@ -8,6 +8,7 @@
 #include <string>
 #include <vector>
 
+#include "app/residual_plateau.hpp"
 #include "app/sweep_record.hpp"
 #include "mesh/structured_grid.hpp"
 #include "solver/flow_fields.hpp"
@@ -21,6 +22,13 @@ struct SweepCase {
     long steady_steps = 0;               ///< > 0: the step cap of the steady attempt
     double unsteady_time = 0.0;          ///< > 0: the end time of a time-accurate point
     bool progress = true;
+    /// When a steady attempt counts as stalled and goes time-accurate before its step cap
+    /// (force_tolerance is taken from the case); window 0: only at the step cap.
+    PlateauCriteria plateau = {};
+    /// > 0: a converged point whose upper surface has separated is disturbed and run
+    /// time-accurately for this long (chords / free-stream speed) to see whether the flow keeps
+    /// it (app/sweep_stability.hpp); 0: no check.
+    double stability_time = 0.0;
 };
 
 /// The overrides of the steady attempt at `alpha` (the user's, then the sweep's).
