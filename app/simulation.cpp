@@ -163,8 +163,8 @@ RunResult Simulation::run() {
             res.status = RunStatus::converged;
             break;
         }
-        if (steady && m_options.stop_steady &&
-            m_options.stop_steady(m_monitor.relative_residual(), res.forces.cl.total))
+        if (m_options.stop_early &&
+            m_options.stop_early(r, m_monitor.relative_residual(), res.forces))
             break;
     }
     progress.finish();

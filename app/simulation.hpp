@@ -34,9 +34,12 @@ struct RunResult {
 struct SimulationOptions {
     bool progress = true;  ///< live progress line on stderr
     std::string label;     ///< prefix of the progress line (e.g. a sweep point)
-    /// Steady runs: asked after every step with the largest relative residual and Cl; true ends
-    /// the run there (status step_cap), e.g. when a sweep sees the iteration stall.
-    std::function<bool(double relative_residual, double cl)> stop_steady;
+    /// Asked after every step with its report, the largest relative residual and the surface
+    /// forces; true ends the run there (status step_cap), e.g. when a sweep sees a steady
+    /// iteration stall or a time-accurate run settle.
+    std::function<bool(const StepReport& step, double relative_residual,
+                       const SurfaceForces& forces)>
+        stop_early;
 };
 
 class Simulation {

@@ -100,79 +100,25 @@ ForceRecord read_force_record(const fs::path& history) {
 struct RunPiece {
     RunResult result;
     std::unique_ptr<Simulation> sim;
-    bool stalled = false;  ///< a steady piece ended early: its residual stopped falling
 };
 
+using StopHook = decltype(SimulationOptions::stop_early);
+
 RunPiece run_piece(const CaseSpec& spec, const StructuredGrid& grid, const fs::path& dir,
-                   const FlowFields* start, const SweepCase& sweep, const std::string& label) {
+                   const FlowFields* start, const SweepCase& sweep, const std::string& label,
+                   StopHook stop_early = {}) {
     prepare_output_dir(dir, spec.text, false);
     SimulationOptions options;
     options.progress = sweep.progress;
     options.label = label;
+    options.stop_early = std::move(stop_early);
     RunPiece p;
-    std::shared_ptr<ResidualPlateau> plateau;
-    if (spec.run.mode == "steady" && sweep.plateau.window > 0) {
-        PlateauCriteria c = sweep.plateau;
-        c.force_tolerance = spec.run.force_tolerance;
-        plateau = std::make_shared<ResidualPlateau>(c);
-        options.stop_steady = [plateau](double relative_residual, double cl) {
-            return plateau->add(relative_residual, cl);
-        };
-    }
     p.sim = std::make_unique<Simulation>(spec, grid, dir, options);
     if (start) p.sim->start_from(*start);
     p.result = p.sim->run();
-    p.stalled = plateau && plateau->stalled() && p.result.status == RunStatus::step_cap;
     if (p.result.status != RunStatus::diverged && p.result.status != RunStatus::interrupted)
         write_run_report(*p.sim, p.result);
     return p;
-}
-
-/// Time-accurate continuation of a point that did not settle.
-void continue_unsteady(PointRecord& r, PointOutcome& out, const SweepCase& sweep, double alpha,
-                       const StructuredGrid& grid, const fs::path& dir, const Simulation& steady,
-                       const std::string& label) {
-    // A time-accurate point runs to its end time: the step cap of the steady attempt (the
-    // case's or --steady-steps) is lifted to a guard against runaway runs only.
-    std::vector<std::string> o = sweep.overrides;
-    o.push_back(fmt::format("flow.alpha={:.17g}", alpha));
-    o.push_back("run.mode=\"unsteady\"");
-    o.push_back(fmt::format("run.steps={}", unsteady_step_guard));
-    if (sweep.unsteady_time > 0)
-        o.push_back(fmt::format("run.end_time={:.17g}", sweep.unsteady_time));
-    const CaseSpec spec = read_case_file(sweep.case_file, o);
-    const FlowFields from = steady.solver().fields();
-    RunPiece p = run_piece(spec, grid, dir / "unsteady", &from, sweep, label + "unsteady ");
-    r.iterations += p.result.steps;
-    r.wall_seconds += p.result.wall_seconds;
-    r.status = status_word(p.result.status);
-    if (p.result.status == RunStatus::interrupted) {
-        out.interrupted = true;
-        return;
-    }
-    if (p.result.status == RunStatus::step_cap)
-        r.note += "; the time-accurate run reached the step cap before its end time";
-    if (p.result.status == RunStatus::diverged) {
-        r.regime = "failed";
-        r.note += "; the time-accurate run diverged: " + p.result.diagnosis;
-        return;
-    }
-    r.final_run = "unsteady";
-    r.regime = "unsteady";
-    const ForceRecord history = read_force_record(dir / "unsteady" / "history.csv");
-    if (history.time.size() >= 4) {
-        const UnsteadyStats st = unsteady_stats(history);
-        take_cycle_statistics(r, st);
-        if (!st.periodic) {
-            r.regime = "steady";
-            r.note +=
-                "; the time-accurate run settled without whole cycles (averaged over the "
-                "second half of its record)";
-        }
-    }
-    r.cl_momentum = momentum_lift(dir / "unsteady");
-    add_separation(r, *p.sim);
-    out.fields = p.sim->solver().fields();
 }
 
 /// Whether the upper surface of a steady point has separated ahead of the trailing-edge zone
@@ -182,42 +128,93 @@ bool upper_surface_separated(const PointRecord& r) {
                               *r.trailing_edge_separation_upper < trailing_edge_zone);
 }
 
-/// The short time-accurate check of a converged point (app/sweep_stability.hpp); continues the
-/// point time-accurately when the flow does not keep the steady solution.
-void check_stability(PointRecord& r, PointOutcome& out, const SweepCase& sweep, double alpha,
-                     const StructuredGrid& grid, const fs::path& dir, const Simulation& steady,
-                     const std::string& label) {
+/// How a time-accurate run of a point starts: from the steady fields of a point that did not
+/// settle, or from the disturbed fields of a converged one (a stability check).
+struct TimeAccurateStart {
+    FlowFields fields;
+    double check_time = 0.0;  ///< > 0: a stability check of a steady solution of lift cl_steady
+    double cl_steady = 0.0;
+};
+
+/// The time-accurate run of a point in DIR/alpha_.../unsteady/: a stability check that the flow
+/// passes ends it early (the steady record stands); otherwise it runs to its end time, or until
+/// its forces settle, and the point is reported from it.
+void run_time_accurate(PointRecord& r, PointOutcome& out, const SweepCase& sweep, double alpha,
+                       const StructuredGrid& grid, const fs::path& dir,
+                       const TimeAccurateStart& from, const std::string& label) {
+    // A time-accurate point runs to its end time: the step cap of the steady attempt (the
+    // case's or --steady-steps) is lifted to a guard against runaway runs only.
     std::vector<std::string> o = sweep.overrides;
     o.push_back(fmt::format("flow.alpha={:.17g}", alpha));
     o.push_back("run.mode=\"unsteady\"");
     o.push_back(fmt::format("run.steps={}", unsteady_step_guard));
-    o.push_back(fmt::format("run.end_time={:.17g}", sweep.stability_time));
+    if (sweep.unsteady_time > 0)
+        o.push_back(fmt::format("run.end_time={:.17g}", sweep.unsteady_time));
     const CaseSpec spec = read_case_file(sweep.case_file, o);
-    const FlowFields from = disturbed(steady.solver().fields(), steady.metrics());
-    RunPiece p = run_piece(spec, grid, dir / "stability", &from, sweep, label + "stability ");
+    auto watch = std::make_shared<TimeAccurateWatch>(from.check_time, from.cl_steady);
+    StopHook hook = [watch](const StepReport& step, double, const SurfaceForces& f) {
+        return watch->add(step.time, f.cl.total, f.cd.total);
+    };
+    const std::string what = from.check_time > 0 ? "check " : "unsteady ";
+    RunPiece p = run_piece(spec, grid, dir / "unsteady", &from.fields, sweep, label + what, hook);
     r.iterations += p.result.steps;
     r.wall_seconds += p.result.wall_seconds;
     if (p.result.status == RunStatus::interrupted) {
         out.interrupted = true;
         return;
     }
+    const std::string check =
+        watch->judged()
+            ? fmt::format(
+                  "a disturbed time-accurate check: lift disturbance {:.2e} over the second "
+                  "quarter of its first {:g} time units, {:.2e} over their last",
+                  watch->verdict().early, from.check_time, watch->verdict().late)
+            : std::string();
+    if (watch->outcome() == TimeAccurateWatch::Outcome::kept) {
+        r.note = "steady solution kept by " + check;
+        return;
+    }
+    if (!check.empty()) r.note = "the steady solution is not kept (" + check + ")";
+    r.status = status_word(p.result.status);
     if (p.result.status == RunStatus::diverged) {
-        r.note = "the time-accurate stability check diverged (the steady result is kept): " +
-                 p.result.diagnosis;
+        r.regime = "failed";
+        r.note += "; the time-accurate run diverged: " + p.result.diagnosis;
         return;
     }
-    const StabilityVerdict v =
-        judge_disturbance(read_force_record(dir / "stability" / "history.csv"), r.cl);
-    const std::string figures = fmt::format(
-        "a disturbed time-accurate check of {:g} time units: lift disturbance {:.2e} over its "
-        "second quarter, {:.2e} over its last",
-        sweep.stability_time, v.early, v.late);
-    if (!v.unstable) {
-        r.note = "steady solution kept by " + figures;
-        return;
+    r.final_run = "unsteady";
+    r.regime = "unsteady";
+    if (watch->outcome() == TimeAccurateWatch::Outcome::settled) {
+        // Settled without shedding: the final instant is the steady flow.
+        r.status = "settled";
+        r.regime = "steady";
+        r.note += fmt::format(
+            "; the time-accurate run settled (Cl and Cd within 1e-4 over 2 time units) at t = "
+            "{:.2f}",
+            p.result.time);
+        r.cl = p.result.forces.cl.total;
+        r.cd = p.result.forces.cd.total;
+        r.cm = p.result.forces.cm.total;
+        r.cl_amplitude = r.cd_amplitude = r.cm_amplitude = 0.0;
+        r.cycles = 0;
+        r.strouhal.reset();
+    } else {
+        if (p.result.status == RunStatus::step_cap)
+            r.note += "; the time-accurate run reached the step cap before its end time";
+        const ForceRecord history = read_force_record(dir / "unsteady" / "history.csv");
+        if (history.time.size() >= 4) {
+            const UnsteadyStats st = unsteady_stats(history);
+            take_cycle_statistics(r, st);
+            if (!st.periodic) {
+                r.regime = "steady";
+                r.note +=
+                    "; the time-accurate run settled without whole cycles (averaged over the "
+                    "second half of its record)";
+            }
+        }
     }
-    r.note = "the steady solution is not kept (" + figures + ")";
-    continue_unsteady(r, out, sweep, alpha, grid, dir, *p.sim, label);
+    r.cl_momentum = momentum_lift(dir / "unsteady");
+    add_separation(r, *p.sim);
+    out.fields = p.sim->solver().fields();
 }
 
 }  // namespace
@@ -243,11 +240,23 @@ PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const Structu
     r.case_text = spec.text;
     const fs::path dir = sweep_dir / r.folder;
     PointOutcome out;
-    RunPiece p = run_piece(spec, grid, dir, start, sweep, label);
+    const bool steady_mode = spec.run.mode == "steady";
+    StopHook stall_hook;
+    std::shared_ptr<ResidualPlateau> plateau;
+    if (steady_mode && sweep.plateau.window > 0) {
+        PlateauCriteria c = sweep.plateau;
+        c.force_tolerance = spec.run.force_tolerance;
+        plateau = std::make_shared<ResidualPlateau>(c);
+        stall_hook = [plateau](const StepReport&, double relative_residual,
+                               const SurfaceForces& f) {
+            return plateau->add(relative_residual, f.cl.total);
+        };
+    }
+    RunPiece p = run_piece(spec, grid, dir, start, sweep, label, stall_hook);
+    const bool stalled = plateau && plateau->stalled() && p.result.status == RunStatus::step_cap;
     r.iterations = p.result.steps;
     r.wall_seconds = p.result.wall_seconds;
-    r.status = status_word(p.result.status);
-    const bool steady_mode = spec.run.mode == "steady";
+    r.status = stalled ? "stalled" : status_word(p.result.status);
     switch (p.result.status) {
         case RunStatus::interrupted:
             out.interrupted = true;
@@ -261,15 +270,15 @@ PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const Structu
         case RunStatus::step_cap:
             if (steady_mode) {
                 r.note =
-                    p.stalled
-                        ? fmt::format(
-                              "the steady iteration stalled (its residual fell less than "
-                              "{:g} times over {} iterations while Cl kept moving) after "
-                              "{} iterations",
-                              sweep.plateau.required_drop, sweep.plateau.window, p.result.steps)
-                        : fmt::format("the steady iteration did not settle in {} iterations",
-                                      spec.run.steps);
-                continue_unsteady(r, out, sweep, alpha, grid, dir, *p.sim, label);
+                    stalled ? fmt::format(
+                                  "the steady iteration stalled (its residual fell less than "
+                                  "{:g} times over {} iterations while Cl kept moving) after "
+                                  "{} iterations",
+                                  sweep.plateau.required_drop, sweep.plateau.window, p.result.steps)
+                            : fmt::format("the steady iteration did not settle in {} iterations",
+                                          spec.run.steps);
+                const TimeAccurateStart from{p.sim->solver().fields(), 0.0, 0.0};
+                run_time_accurate(r, out, sweep, alpha, grid, dir, from, label);
                 if (out.interrupted) return out;
                 break;
             }
@@ -283,7 +292,9 @@ PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const Structu
             out.fields = p.sim->solver().fields();
             if (steady_mode && p.result.status == RunStatus::converged &&
                 sweep.stability_time > 0 && upper_surface_separated(r)) {
-                check_stability(r, out, sweep, alpha, grid, dir, *p.sim, label);
+                const TimeAccurateStart check{disturbed(p.sim->solver().fields(), p.sim->metrics()),
+                                              sweep.stability_time, r.cl};
+                run_time_accurate(r, out, sweep, alpha, grid, dir, check, label);
                 if (out.interrupted) return out;
             }
             if (!steady_mode) {

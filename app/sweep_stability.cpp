@@ -37,4 +37,56 @@ StabilityVerdict judge_disturbance(const ForceRecord& history, double cl_steady,
     return v;
 }
 
+TimeAccurateWatch::TimeAccurateWatch(double check_time, double cl_steady, double settle_after,
+                                     double settle_window, double settle_range)
+    : m_check_time(check_time),
+      m_cl_steady(cl_steady),
+      m_settle_after(settle_after),
+      m_settle_window(settle_window),
+      m_settle_range(settle_range) {}
+
+bool TimeAccurateWatch::add(double time, double cl, double cd) {
+    if (!m_started) {
+        m_start = time;
+        m_started = true;
+    }
+    const double elapsed = time - m_start;
+    if (m_check_time > 0 && !m_judged) {
+        m_until_check.time.push_back(time);
+        m_until_check.cl.push_back(cl);
+        m_until_check.cd.push_back(cd);
+        m_until_check.cm.push_back(0.0);
+        if (elapsed >= m_check_time) {
+            m_judged = true;
+            m_verdict = judge_disturbance(m_until_check, m_cl_steady);
+            m_until_check = {};
+            if (!m_verdict.unstable) {
+                m_outcome = Outcome::kept;
+                return true;
+            }
+        }
+    }
+    m_time.push_back(time);
+    m_cl.push_back(cl);
+    m_cd.push_back(cd);
+    while (m_time.size() > 2 && m_time.back() - m_time[1] >= m_settle_window) {
+        m_time.pop_front();
+        m_cl.pop_front();
+        m_cd.pop_front();
+    }
+    // A run the check found unstable goes to its end time: its mode may still be small.
+    if (m_check_time <= 0 && elapsed >= m_settle_after && settled()) {
+        m_outcome = Outcome::settled;
+        return true;
+    }
+    return false;
+}
+
+bool TimeAccurateWatch::settled() const {
+    if (m_time.back() - m_time.front() < m_settle_window) return false;
+    const auto [cl_lo, cl_hi] = std::minmax_element(m_cl.begin(), m_cl.end());
+    const auto [cd_lo, cd_hi] = std::minmax_element(m_cd.begin(), m_cd.end());
+    return *cl_hi - *cl_lo < m_settle_range && *cd_hi - *cd_lo < m_settle_range;
+}
+
 }  // namespace veer

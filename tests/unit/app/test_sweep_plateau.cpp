@@ -104,7 +104,8 @@ TEST(SweepPlateau, StalledSteadyPointGoesTimeAccurateAtTheStall) {
     std::string text = test::tiny_case_text();
     text.replace(text.find("steps = 5"), 9, "steps = 500\nend_time = 0.05");
     test::write_text(tmp / "c.toml", text);
-    SweepCase sweep{tmp / "c.toml", {}, 0, 0.0, false, {20, 1e30, 0.0, 10}};
+    SweepCase sweep{tmp / "c.toml", {}, 0, 0.0, false};
+    sweep.plateau = {20, 1e30, 0.0, 10};
     const CaseSpec spec = read_case_file(sweep.case_file, point_overrides(sweep, 4.0));
     const StructuredGrid grid = build_mesh(spec).grid;
     const PointOutcome out = run_sweep_point(sweep, 4.0, grid, tmp / "sw", nullptr, "");
@@ -112,6 +113,7 @@ TEST(SweepPlateau, StalledSteadyPointGoesTimeAccurateAtTheStall) {
     const PointRecord& r = *out.record;
     EXPECT_NE(r.note.find("stalled"), std::string::npos) << r.note;
     EXPECT_EQ(r.final_run, "unsteady");
+    EXPECT_EQ(r.status, "end time");  // 0.05 time units: far too short to count as settled
     const CsvTable steady = CsvTable::read(tmp / "sw" / r.folder / "history.csv");
     EXPECT_EQ(steady.rows(), 20u);
     EXPECT_TRUE(std::filesystem::exists(tmp / "sw" / r.folder / "unsteady" / "history.csv"));
@@ -123,8 +125,10 @@ TEST(SweepPlateau, SimulationStopsWhereItsStopRequestSaysSo) {
     SimulationOptions o;
     o.progress = false;
     long calls = 0;
-    o.stop_steady = [&calls](double relative_residual, double) {
+    o.stop_early = [&calls](const StepReport& step, double relative_residual,
+                            const SurfaceForces&) {
         ++calls;
+        EXPECT_EQ(step.step, calls);
         EXPECT_GT(relative_residual, 0.0);
         return calls == 3;
     };
