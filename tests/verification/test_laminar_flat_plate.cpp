@@ -10,6 +10,7 @@
 /// would be 5-7% over the middle of the plate, hence the larger Reynolds number.
 #include <gtest/gtest.h>
 
+#include <algorithm>
 #include <cmath>
 #include <iostream>
 #include <vector>
