@@ -35,11 +35,11 @@ struct SweepOptions {
     std::filesystem::path out_dir;
     bool force = false;
     bool quiet = false;
-    long point_index = -1;       ///< >= 0: run only this point (0-based, job arrays)
-    bool gather = false;         ///< only gather finished points into the polar
-    long steady_steps = 0;       ///< > 0: step cap of each steady attempt
-    double unsteady_time = 0;    ///< > 0: end time of time-accurate points
-    double stability_time = 10;  ///< disturbed time-accurate check of separated points; 0: none
+    long point_index = -1;      ///< >= 0: run only this point (0-based, job arrays)
+    bool gather = false;        ///< only gather finished points into the polar
+    long steady_steps = 0;      ///< > 0: step cap of each steady attempt
+    double unsteady_time = 0;   ///< > 0: end time of time-accurate points
+    double stability_time = 6;  ///< disturbed time-accurate check of separated points; 0: none
 };
 
 /// `veer report`: DIR/report.html with pictures, for a run folder or a sweep folder.
