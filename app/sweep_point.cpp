@@ -10,6 +10,7 @@
 #include "app/run_report.hpp"
 #include "app/simulation.hpp"
 #include "app/sweep_angles.hpp"
+#include "app/sweep_momentum_mean.hpp"
 #include "app/sweep_stability.hpp"
 #include "app/sweep_unsteady_stats.hpp"
 #include "io/case_file.hpp"
@@ -106,7 +107,7 @@ using StopHook = decltype(SimulationOptions::stop_early);
 
 RunPiece run_piece(const CaseSpec& spec, const StructuredGrid& grid, const fs::path& dir,
                    const FlowFields* start, const SweepCase& sweep, const std::string& label,
-                   StopHook stop_early = {}) {
+                   StopHook stop_early = {}, const Simulation** running = nullptr) {
     prepare_output_dir(dir, spec.text, false);
     SimulationOptions options;
     options.progress = sweep.progress;
@@ -114,6 +115,7 @@ RunPiece run_piece(const CaseSpec& spec, const StructuredGrid& grid, const fs::p
     options.stop_early = std::move(stop_early);
     RunPiece p;
     p.sim = std::make_unique<Simulation>(spec, grid, dir, options);
+    if (running) *running = p.sim.get();  // for a stop hook that reads the fields
     if (start) p.sim->start_from(*start);
     p.result = p.sim->run();
     if (p.result.status != RunStatus::diverged && p.result.status != RunStatus::interrupted)
@@ -152,11 +154,16 @@ void run_time_accurate(PointRecord& r, PointOutcome& out, const SweepCase& sweep
         o.push_back(fmt::format("run.end_time={:.17g}", sweep.unsteady_time));
     const CaseSpec spec = read_case_file(sweep.case_file, o);
     auto watch = std::make_shared<TimeAccurateWatch>(from.check_time, from.cl_steady);
-    StopHook hook = [watch](const StepReport& step, double, const SurfaceForces& f) {
+    auto sampler = std::make_shared<MomentumLiftSampler>(grid, spec.post.contours);
+    auto running = std::make_shared<const Simulation*>(nullptr);
+    StopHook hook = [watch, sampler, running](const StepReport& step, double,
+                                              const SurfaceForces& f) {
+        if (*running) sampler->after_step(**running, step.step, step.time);
         return watch->add(step.time, f.cl.total, f.cd.total);
     };
     const std::string what = from.check_time > 0 ? "check " : "unsteady ";
-    RunPiece p = run_piece(spec, grid, dir / "unsteady", &from.fields, sweep, label + what, hook);
+    RunPiece p = run_piece(spec, grid, dir / "unsteady", &from.fields, sweep, label + what, hook,
+                           running.get());
     r.iterations += p.result.steps;
     r.wall_seconds += p.result.wall_seconds;
     if (p.result.status == RunStatus::interrupted) {
@@ -200,11 +207,14 @@ void run_time_accurate(PointRecord& r, PointOutcome& out, const SweepCase& sweep
     } else {
         if (p.result.status == RunStatus::step_cap)
             r.note += "; the time-accurate run reached the step cap before its end time";
+        r.cl_momentum = momentum_lift(dir / "unsteady");
         const ForceRecord history = read_force_record(dir / "unsteady" / "history.csv");
         if (history.time.size() >= 4) {
             const UnsteadyStats st = unsteady_stats(history);
             take_cycle_statistics(r, st);
-            if (!st.periodic) {
+            if (st.periodic) {
+                if (auto m = sampler->mean(st.window_begin, st.window_end)) r.cl_momentum = m;
+            } else {
                 r.regime = "steady";
                 r.note +=
                     "; the time-accurate run settled without whole cycles (averaged over the "
@@ -212,7 +222,8 @@ void run_time_accurate(PointRecord& r, PointOutcome& out, const SweepCase& sweep
             }
         }
     }
-    r.cl_momentum = momentum_lift(dir / "unsteady");
+    if (watch->outcome() == TimeAccurateWatch::Outcome::settled)
+        r.cl_momentum = momentum_lift(dir / "unsteady");
     add_separation(r, *p.sim);
     out.fields = p.sim->solver().fields();
 }
