@@ -7,14 +7,22 @@
 #include "mesh/errors.hpp"
 
 namespace veer {
+namespace {
+/// First value of a record with the nu_tilde reference (the older record starts with the step
+/// count, which is never negative).
+constexpr double record_with_nu_tilde = -2.0;
+constexpr std::size_t legacy_head = 5;  // count, 3 references, relative
+constexpr std::size_t head = 7;         // marker, count, 4 references, relative
+}  // namespace
 
 bool ConvergenceMonitor::add(const ConvergenceSample& s) {
-    const double r[3] = {s.residual_u, s.residual_v, s.residual_continuity};
+    const double r[residual_count] = {s.residual_u, s.residual_v, s.residual_continuity,
+                                      s.residual_nu_tilde};
     ++m_count;
     if (m_count <= m_criteria.reference_steps)
-        for (int k = 0; k < 3; ++k) m_reference[k] = std::max(m_reference[k], r[k]);
+        for (int k = 0; k < residual_count; ++k) m_reference[k] = std::max(m_reference[k], r[k]);
     m_relative = 0.0;
-    for (int k = 0; k < 3; ++k)
+    for (int k = 0; k < residual_count; ++k)
         if (m_reference[k] > 0.0) m_relative = std::max(m_relative, r[k] / m_reference[k]);
     m_cl.push_back(s.cl);
     m_cd.push_back(s.cd);
@@ -37,8 +45,13 @@ double ConvergenceMonitor::force_change() const {
 }
 
 std::vector<double> ConvergenceMonitor::save() const {
-    std::vector<double> out = {static_cast<double>(m_count), m_reference[0], m_reference[1],
-                               m_reference[2], m_relative};
+    std::vector<double> out = {record_with_nu_tilde,
+                               static_cast<double>(m_count),
+                               m_reference[0],
+                               m_reference[1],
+                               m_reference[2],
+                               m_reference[3],
+                               m_relative};
     for (std::size_t k = 0; k < m_cl.size(); ++k) {
         out.push_back(m_cl[k]);
         out.push_back(m_cd[k]);
@@ -47,13 +60,18 @@ std::vector<double> ConvergenceMonitor::save() const {
 }
 
 void ConvergenceMonitor::load(const std::vector<double>& saved) {
-    VEER_VERIFY(saved.size() >= 5 && (saved.size() - 5) % 2 == 0, "bad convergence record");
-    m_count = static_cast<long>(saved[0]);
-    for (int k = 0; k < 3; ++k) m_reference[k] = saved[static_cast<std::size_t>(k) + 1];
-    m_relative = saved[4];
+    m_legacy = !saved.empty() && saved[0] != record_with_nu_tilde;
+    const std::size_t start = m_legacy ? legacy_head : head;
+    VEER_VERIFY(saved.size() >= start && (saved.size() - start) % 2 == 0, "bad convergence record");
+    const std::size_t at = m_legacy ? 0 : 1;  // where the count is
+    m_count = static_cast<long>(saved[at]);
+    const int kept = m_legacy ? 3 : residual_count;
+    for (int k = 0; k < residual_count; ++k)
+        m_reference[k] = k < kept ? saved[at + 1 + static_cast<std::size_t>(k)] : 0.0;
+    m_relative = saved[start - 1];
     m_cl.clear();
     m_cd.clear();
-    for (std::size_t k = 5; k < saved.size(); k += 2) {
+    for (std::size_t k = start; k < saved.size(); k += 2) {
         m_cl.push_back(saved[k]);
         m_cd.push_back(saved[k + 1]);
     }

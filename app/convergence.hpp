@@ -1,6 +1,8 @@
 #pragma once
 /// Decides when a steady run has converged: residuals fallen by the requested factor from their
-/// reference (the largest of the first steps) and Cl, Cd settled over a window of steps.
+/// reference (the largest of the first steps) and Cl, Cd settled over a window of steps. The
+/// residuals are those of every equation solved: u, v, continuity and, with a turbulence model,
+/// nu_tilde (a residual that stays 0, as nu_tilde's does in laminar runs, is left out).
 #include <deque>
 #include <vector>
 
@@ -13,10 +15,12 @@ struct ConvergenceCriteria {
     int force_window = 100;         ///< steps over which the forces must have settled
 };
 
-/// One step's figures as the monitor sees them.
+/// One step's figures as the monitor sees them (nu_tilde last, so that older five-value
+/// initialisations keep their meaning).
 struct ConvergenceSample {
     double residual_u = 0.0, residual_v = 0.0, residual_continuity = 0.0;
     double cl = 0.0, cd = 0.0;
+    double residual_nu_tilde = 0.0;  ///< 0 when laminar
 };
 
 class ConvergenceMonitor {
@@ -35,12 +39,21 @@ public:
 
     /// The monitor's memory, for checkpoints (restarts continue bit for bit).
     std::vector<double> save() const;
+    /// Reads save()'s record, or the older one without nu_tilde (its nu_tilde reference is then
+    /// unknown: see legacy_record()).
     void load(const std::vector<double>& saved);
+    /// True after load() of a record written before nu_tilde was monitored.
+    bool legacy_record() const { return m_legacy; }
+    /// Steps recorded so far (restarts included).
+    long count() const { return m_count; }
+
+    static constexpr int residual_count = 4;  ///< u, v, continuity, nu_tilde
 
 private:
     ConvergenceCriteria m_criteria;
     long m_count = 0;
-    double m_reference[3] = {0.0, 0.0, 0.0};
+    double m_reference[residual_count] = {0.0, 0.0, 0.0, 0.0};
+    bool m_legacy = false;
     double m_relative = 1.0;
     std::deque<double> m_cl, m_cd;
 };

@@ -13,6 +13,8 @@ struct ProgressFigures {
     double cl = 0.0, cd = 0.0;
     double fraction_done = 0.0;  ///< 0..1 estimate of the way to the end
     bool steady = true;
+    bool turbulent = false;          ///< show the nu_tilde residual too
+    double residual_nu_tilde = 0.0;  ///< turbulence model's working variable
 };
 
 class ProgressLine {

@@ -59,6 +59,14 @@ void Simulation::resume(const CheckpointData& checkpoint) {
         else
             solver_state.push_back(a);
     }
+    // A record from before nu_tilde was monitored has no nu_tilde reference; past the reference
+    // steps it cannot be rebuilt, and guessing one would change what "converged" means.
+    if (m_monitor.legacy_record() && m_spec.model != "laminar" &&
+        m_monitor.count() > criteria_for(m_spec.run).reference_steps)
+        throw InputError(
+            "this checkpoint of a " + m_spec.model +
+            " run was written by an older veer that did not monitor the nu_tilde residual; "
+            "start the run afresh (veer run CASE) to get a convergence check of every equation");
     m_solver->restore(solver_state);
     m_resumed = true;
     m_last_checkpoint_step = m_solver->step_count();
@@ -104,6 +112,7 @@ RunResult Simulation::run() {
     const auto start = std::chrono::steady_clock::now();
     const bool steady = is_steady(m_spec);
     const bool has_wall = m_grid.c_layout().has_value();
+    const bool turbulent = m_spec.model != "laminar";
     HistoryLog history(m_out / "history.csv", m_resumed, m_solver->step_count());
     FieldSeries series(m_out, m_resumed ? SeriesStart::resume : SeriesStart::fresh);
     auto frame_time = [&] {
@@ -141,9 +150,11 @@ RunResult Simulation::run() {
             res.forces =
                 integrate_surface_forces(m_grid, m_metrics, m_solver->fields(), m_spec.flow);
         history.append({r.step, r.time, r.residual_u, r.residual_v, r.residual_continuity,
-                        res.forces.cl.total, res.forces.cd.total, res.forces.cm.total});
-        const bool converged = m_monitor.add({r.residual_u, r.residual_v, r.residual_continuity,
-                                              res.forces.cl.total, res.forces.cd.total});
+                        res.forces.cl.total, res.forces.cd.total, res.forces.cm.total,
+                        r.residual_nu_tilde});
+        const bool converged =
+            m_monitor.add({r.residual_u, r.residual_v, r.residual_continuity, res.forces.cl.total,
+                           res.forces.cd.total, r.residual_nu_tilde});
         if (m_monitor.blowing_up()) {
             res.status = RunStatus::diverged;
             res.diagnosis = divergence_diagnosis(r);
@@ -155,7 +166,8 @@ RunResult Simulation::run() {
                                       : r.time / m_spec.run.end_time;
         progress.update({r.step, r.time, r.residual_u, r.residual_v, r.residual_continuity,
                          res.forces.cl.total, res.forces.cd.total,
-                         std::clamp(std::max(by_steps, by_goal), 0.0, 1.0), steady});
+                         std::clamp(std::max(by_steps, by_goal), 0.0, 1.0), steady, turbulent,
+                         r.residual_nu_tilde});
         if (m_spec.run.output_every > 0 && r.step % m_spec.run.output_every == 0)
             series.write_frame(frame_time(), m_grid, m_metrics, m_solver->fields());
         if (r.step % m_spec.run.checkpoint_every == 0) write_checkpoint_now();

@@ -24,9 +24,10 @@ void check_settings(const FlowConditions& c, const SolverSettings& s) {
         throw InputError(msg.str());
     };
     if (!(c.reynolds > 0.0)) fail("reynolds", c.reynolds, "> 0");
-    if (!(s.pseudo_cfl > 0.0)) fail("pseudo_cfl", s.pseudo_cfl, "> 0");
-    if (s.mode == TimeMode::steady && !(s.pseudo_cfl > 0.5 * s.rhie_chow_scale))
-        fail("pseudo_cfl", s.pseudo_cfl, "> rhie_chow_scale / 2 (pressure smoothing stability)");
+    if (!(s.pseudo_cfl >= 0.0)) fail("pseudo_cfl", s.pseudo_cfl, "> 0 (or 0: the default)");
+    if (s.mode == TimeMode::steady && !(effective_pseudo_cfl(s) > 0.5 * s.rhie_chow_scale))
+        fail("pseudo_cfl", effective_pseudo_cfl(s),
+             "> rhie_chow_scale / 2 (pressure smoothing stability)");
     if (!(s.rhie_chow_scale > 0.0)) fail("rhie_chow_scale", s.rhie_chow_scale, "> 0");
     if (s.local_step_interval < 1) fail("local_step_interval", s.local_step_interval, ">= 1");
     if (s.momentum_sweeps < 1) fail("momentum_sweeps", s.momentum_sweeps, ">= 1");
@@ -136,7 +137,7 @@ void FlowSolverCore::setup_uniform_pressure() {
 
 void FlowSolverCore::refresh_local_steps() {
     std::vector<double> dt;
-    local_time_steps(geom, vel.u.view(), vel.v.view(), nu, settings.pseudo_cfl,
+    local_time_steps(geom, vel.u.view(), vel.v.view(), nu, effective_pseudo_cfl(settings),
                      settings.viscous_weight, dt);
     local_dt.set_interior(dt);
     apply_local_steps();
@@ -146,7 +147,7 @@ void FlowSolverCore::apply_local_steps() {
     fill_copy_ghosts(faces, connectivity, local_dt.view());
     const int ni = geom.ni, nj = geom.nj;
     CellView d = local_dt.view();
-    const double rc = settings.rhie_chow_scale / settings.pseudo_cfl;
+    const double rc = settings.rhie_chow_scale / effective_pseudo_cfl(settings);
     for (int j = 0; j < nj; ++j)
         for (int f = 0; f <= ni; ++f) {
             const std::size_t k = geom.face_i(f, j);

@@ -15,13 +15,37 @@
 namespace veer {
 namespace {
 
-CaseSpec small_case(const std::string& mode, long steps) {
+CaseSpec small_case(const std::string& mode, long steps, const std::string& model = "laminar") {
     return parse_case_text(
         "[geometry]\nnaca = \"0012\"\n[mesh]\naround = 64\nnormal = 16\nwake = 12\n"
-        "far_field = 10\nfirst_cell = 1e-2\n[flow]\nreynolds = 200\nalpha = 3\n[run]\nmode = \"" +
-            mode + "\"\nsteps = " + std::to_string(steps) +
+        "far_field = 10\nfirst_cell = 1e-2\n[flow]\nreynolds = 200\nalpha = 3\nmodel = \"" +
+            model + "\"\n[run]\nmode = \"" + mode + "\"\nsteps = " + std::to_string(steps) +
             "\ncheckpoint_every = 1000\nend_time = 100\n",
         "small.toml", ".");
+}
+
+/// The checkpoint and history of a run as an older veer wrote them: the convergence record
+/// without the nu_tilde reference (count, three references, relative residual, Cl/Cd pairs)
+/// and history.csv without the nu_tilde column.
+void make_legacy(const std::filesystem::path& dir) {
+    CheckpointData c = read_checkpoint(dir / "checkpoint.h5");
+    for (NamedArray& a : c.arrays)
+        if (a.name == "simulation_convergence") {
+            std::vector<double> old = {a.values[1], a.values[2], a.values[3], a.values[4],
+                                       a.values[6]};
+            old.insert(old.end(), a.values.begin() + 7, a.values.end());
+            a.values = old;
+        }
+    write_checkpoint(dir / "checkpoint.h5", c);
+    std::string text = test::read_text(dir / "history.csv"), out;
+    std::size_t at = 0;
+    while (at < text.size()) {
+        const std::size_t end = text.find('\n', at);
+        const std::string line = text.substr(at, end - at);
+        out += line.substr(0, line.rfind(',')) + "\n";
+        at = end + 1;
+    }
+    test::write_text(dir / "history.csv", out);
 }
 
 bool same_bits(const std::vector<NamedArray>& a, const std::vector<NamedArray>& b) {
@@ -67,6 +91,75 @@ void restart_reproduces(const std::string& mode) {
 TEST(SimulationRestart, SteadyRunContinuesBitForBit) { restart_reproduces("steady"); }
 
 TEST(SimulationRestart, UnsteadyRunContinuesBitForBit) { restart_reproduces("unsteady"); }
+
+TEST(SimulationRestart, SpalartAllmarasRunContinuesBitForBit) {
+    test::AppScratch scratch;
+    SimulationOptions quiet;
+    quiet.progress = false;
+    const CaseSpec whole = small_case("steady", 24, "spalart-allmaras");
+    Simulation straight(whole, build_mesh(whole).grid, scratch / "straight", quiet);
+    std::filesystem::create_directories(scratch / "straight");
+    straight.run();
+    const CaseSpec part = small_case("steady", 11, "spalart-allmaras");
+    std::filesystem::create_directories(scratch / "pieces");
+    {
+        Simulation interrupted(part, build_mesh(part).grid, scratch / "pieces", quiet);
+        ASSERT_EQ(interrupted.run().steps, 11);
+    }
+    const CheckpointData saved = read_checkpoint(scratch / "pieces" / "checkpoint.h5");
+    Simulation resumed(whole, saved.grid, scratch / "pieces", quiet);
+    resumed.resume(saved);
+    EXPECT_EQ(resumed.run().steps, 24);
+    EXPECT_TRUE(same_bits(straight.solver().state(), resumed.solver().state()));
+    const std::string history = test::read_text(scratch / "pieces" / "history.csv");
+    EXPECT_EQ(test::read_text(scratch / "straight" / "history.csv"), history);
+    EXPECT_NE(history.find(",residual_nu_tilde\n"), std::string::npos);
+}
+
+TEST(SimulationRestart, OlderLaminarCheckpointResumesWithTheHistoryPadded) {
+    test::AppScratch scratch;
+    SimulationOptions quiet;
+    quiet.progress = false;
+    const CaseSpec part = small_case("steady", 30);
+    {
+        Simulation first(part, build_mesh(part).grid, scratch.path(), quiet);
+        ASSERT_EQ(first.run().steps, 30);
+    }
+    make_legacy(scratch.path());
+    const CaseSpec whole = small_case("steady", 33);
+    const CheckpointData saved = read_checkpoint(scratch / "checkpoint.h5");
+    Simulation resumed(whole, saved.grid, scratch.path(), quiet);
+    resumed.resume(saved);
+    EXPECT_EQ(resumed.run().steps, 33);
+    const std::string history = test::read_text(scratch / "history.csv");
+    EXPECT_EQ(history.substr(0, history.find('\n')),
+              "step,time,residual_u,residual_v,residual_continuity,cl,cd,cm,residual_nu_tilde");
+    // Rows 1-30 from the older file: nu_tilde not recorded; rows 31-33 new: laminar, 0.
+    EXPECT_NE(history.find("\n30,"), std::string::npos);
+    EXPECT_NE(history.substr(history.find("\n30,")).find(",nan\n31,"), std::string::npos);
+    EXPECT_NE(history.find(",0.000000e+00\n"), std::string::npos);
+}
+
+TEST(SimulationRestart, OlderSpalartAllmarasCheckpointIsRefusedClearly) {
+    test::AppScratch scratch;
+    SimulationOptions quiet;
+    quiet.progress = false;
+    const CaseSpec part = small_case("steady", 30, "spalart-allmaras");
+    {
+        Simulation first(part, build_mesh(part).grid, scratch.path(), quiet);
+        ASSERT_EQ(first.run().steps, 30);
+    }
+    make_legacy(scratch.path());
+    const CheckpointData saved = read_checkpoint(scratch / "checkpoint.h5");
+    Simulation resumed(small_case("steady", 40, "spalart-allmaras"), saved.grid, scratch.path(),
+                       quiet);
+    try {
+        resumed.resume(saved);
+        FAIL() << "an SA checkpoint without the nu_tilde reference was resumed";
+    } catch (const InputError& e) {
+        EXPECT_NE(std::string(e.what()).find("nu_tilde"), std::string::npos) << e.what();
+    }
+}
 
 TEST(SimulationRestart, DivergenceNamesTheCellAndKeepsTheLastGoodCheckpoint) {
     test::AppScratch scratch;

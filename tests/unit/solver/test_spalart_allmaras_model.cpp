@@ -12,6 +12,7 @@
 #include "solver/boundary_faces.hpp"
 #include "solver/connectivity.hpp"
 #include "solver/face_geometry.hpp"
+#include "solver/solver_settings.hpp"
 #include "solver/turbulence_model.hpp"
 
 namespace veer {
@@ -144,6 +145,18 @@ TEST(TurbulenceModel, LaminarGivesZerosAndNamesParse) {
     EXPECT_EQ(turbulence_model_kind("laminar"), TurbulenceModelKind::laminar);
     EXPECT_EQ(turbulence_model_kind("spalart-allmaras"), TurbulenceModelKind::spalart_allmaras);
     EXPECT_THROW(turbulence_model_kind("k-epsilon"), InputError);
+}
+
+TEST(TurbulenceModel, PseudoCflDefaultsByModelAndAnExplicitOneWins) {
+    // The turbulent default is the largest of 5, 4, 3 that converged the NACA 0012 at Re 6e6
+    // on a y+ 1 grid (solver_settings.hpp); the laminar one is unchanged.
+    SolverSettings s;
+    EXPECT_EQ(effective_pseudo_cfl(s), laminar_pseudo_cfl);
+    s.turbulence = TurbulenceModelKind::spalart_allmaras;
+    EXPECT_EQ(effective_pseudo_cfl(s), turbulent_pseudo_cfl);
+    EXPECT_LT(turbulent_pseudo_cfl, laminar_pseudo_cfl);
+    s.pseudo_cfl = 7.5;
+    EXPECT_EQ(effective_pseudo_cfl(s), 7.5);
 }
 
 }  // namespace
