@@ -1,0 +1,98 @@
+// A turbulent angle-of-attack sweep: cases/wind-turbine-sweep-sa.toml (NACA 0012, Re 6e6,
+// Spalart-Allmaras, 384 x 128 cells: 256 on the surface, 64 along each side of the wake cut, 128
+// normal, first cell at y+ 1, far field 100 chords), 0 to 18 degrees in 2-degree steps, run as
+// `veer sweep` runs it (each point from the previous one, the stall detector, the stability check
+// of separated points) on 2 threads: wall time per point (steady attempt plus any time-accurate
+// run) and in total, and the sweep's summary figures. Target: under 30 minutes in all. Prints
+// figures; it is not a test.
+//
+//   bench_sweep_turbulent [WORK_DIR]   (default: a folder under the system temp dir, removed after)
+#include <fmt/format.h>
+#include <omp.h>
+
+#include <chrono>
+#include <filesystem>
+#include <nlohmann/json.hpp>
+#include <string>
+
+#include "app/commands.hpp"
+#include "app/sweep_angles.hpp"
+#include "app/sweep_record.hpp"
+#include "app/wait_policy.hpp"
+#include "io/json_writer.hpp"
+
+namespace {
+namespace fs = std::filesystem;
+
+/// The shipped case, so that the benchmark times what the case file gives users.
+const fs::path sweep_case =
+    fs::path(__FILE__).parent_path().parent_path() / "cases" / "wind-turbine-sweep-sa.toml";
+constexpr const char* angles = "0:18:2";
+
+std::string number_or_null(const nlohmann::json& j, const char* key, const char* format) {
+    if (!j.contains(key) || j[key].is_null()) return "null";
+    return fmt::format(fmt::runtime(format), j[key].get<double>());
+}
+
+}  // namespace
+
+int main(int argc, char** argv) {
+    veer::restart_with_passive_waits(argv);
+    const bool keep = argc > 1;
+    const fs::path work =
+        keep ? fs::path(argv[1]) : fs::temp_directory_path() / "veer_bench_sweep_turbulent";
+    if (!keep) fs::remove_all(work);
+    fs::create_directories(work);
+
+    omp_set_num_threads(2);
+    veer::SweepOptions o;
+    o.input.case_file = sweep_case;
+    o.alpha = angles;
+    o.out_dir = work / "sweep";
+    o.quiet = true;
+    o.force = true;
+    const auto t0 = std::chrono::steady_clock::now();
+    const int status = veer::run_sweep_command(o);
+    const double total =
+        std::chrono::duration<double>(std::chrono::steady_clock::now() - t0).count();
+
+    fmt::print(
+        "turbulent sweep, {} (NACA 0012, Re 6e6, Spalart-Allmaras, 384 x 128), "
+        "2 threads:\n",
+        sweep_case.filename().string());
+    fmt::print("{:>6} {:>9} {:>9} {:>9} {:>8} {:>8} {:>11} {:>8}\n", "alpha", "regime", "Cl", "Cd",
+               "sep x/c", "St", "iterations", "wall s");
+    for (const double a : veer::parse_sweep_angles(angles)) {
+        const fs::path record = veer::record_path(o.out_dir / veer::point_folder_name(a));
+        if (!fs::exists(record)) {
+            fmt::print("{:>6.1f} missing\n", a);
+            continue;
+        }
+        const veer::PointRecord r =
+            veer::record_from_json(veer::read_json_file(record), record.string());
+        const auto optional = [](const std::optional<double>& x) {
+            return x ? fmt::format("{:.3f}", *x) : std::string("-");
+        };
+        fmt::print("{:>6.1f} {:>9} {:>9.4f} {:>9.5f} {:>8} {:>8} {:>11} {:>8.1f}  {}\n", r.alpha,
+                   r.regime, r.cl, r.cd, optional(r.trailing_edge_separation_upper),
+                   optional(r.strouhal), r.iterations, r.wall_seconds, r.note);
+    }
+    const fs::path summary = o.out_dir / "summary.json";
+    if (fs::exists(summary)) {
+        const nlohmann::json s = veer::read_json_file(summary);
+        fmt::print(
+            "summary: lift slope {} /deg over {}, alpha zero lift {}, cl_max {} at {} deg "
+            "(stall in range: {}), separation onset {} deg, cd_min {}\n",
+            number_or_null(s, "lift_slope_per_deg", "{:.5f}"),
+            s.contains("linear_range") ? s["linear_range"].dump() : "null",
+            number_or_null(s, "alpha_zero_lift", "{:.3f}"), number_or_null(s, "cl_max", "{:.4f}"),
+            number_or_null(s, "alpha_cl_max", "{:g}"),
+            s.contains("stall_in_range") ? s["stall_in_range"].dump() : "null",
+            number_or_null(s, "alpha_separation_onset", "{:g}"),
+            number_or_null(s, "cd_min", "{:.5f}"));
+    }
+    fmt::print("total {:.1f} s ({:.1f} min; target < 30 min), sweep exit status {}\n", total,
+               total / 60, status);
+    if (!keep) fs::remove_all(work);
+    return 0;
+}
