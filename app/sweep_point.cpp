@@ -181,6 +181,13 @@ void run_time_accurate(PointRecord& r, PointOutcome& out, const SweepCase& sweep
         r.note = "steady solution kept by " + check;
         return;
     }
+    if (p.result.status == RunStatus::diverged && from.check_time > 0 && !watch->judged()) {
+        r.note =
+            "the disturbed time-accurate check diverged before it could judge (the steady "
+            "result is kept, unchecked): " +
+            p.result.diagnosis;
+        return;
+    }
     if (!check.empty()) r.note = "the steady solution is not kept (" + check + ")";
     r.status = status_word(p.result.status);
     if (p.result.status == RunStatus::diverged) {
