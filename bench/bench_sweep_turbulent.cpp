@@ -6,11 +6,19 @@
 // run) and in total, and the sweep's summary figures. Target: under 30 minutes in all. Prints
 // figures; it is not a test.
 //
-//   bench_sweep_turbulent [WORK_DIR]   (default: a folder under the system temp dir, removed after)
+//   bench_sweep_turbulent [WORK_DIR [STABILITY_TIME [--each-from-free-stream] [TABLE.KEY=VALUE
+//   ...]]]
+// WORK_DIR: kept (default: a folder under the system temp dir, removed after); STABILITY_TIME:
+// as --stability-time (default: veer sweep's); --each-from-free-stream: every point started
+// from the free stream (--point-index K for each K, then --gather), not from the previous one;
+// the rest: --set items applied to every point.
 #include <fmt/format.h>
+#include <fmt/ranges.h>
 #include <omp.h>
 
+#include <algorithm>
 #include <chrono>
+#include <cstdlib>
 #include <filesystem>
 #include <nlohmann/json.hpp>
 #include <string>
@@ -51,15 +59,35 @@ int main(int argc, char** argv) {
     o.out_dir = work / "sweep";
     o.quiet = true;
     o.force = true;
+    if (argc > 2) o.stability_time = std::atof(argv[2]);
+    bool from_free_stream = false;
+    for (int k = 3; k < argc; ++k) {
+        if (std::string(argv[k]) == "--each-from-free-stream")
+            from_free_stream = true;
+        else
+            o.input.overrides.emplace_back(argv[k]);
+    }
     const auto t0 = std::chrono::steady_clock::now();
-    const int status = veer::run_sweep_command(o);
+    int status = 0;
+    if (from_free_stream) {
+        // As a job array runs it: every point from the free stream, then gathered.
+        const long count = static_cast<long>(veer::parse_sweep_angles(angles).size());
+        for (o.point_index = 0; o.point_index < count; ++o.point_index)
+            status = std::max(status, veer::run_sweep_command(o));
+        o.point_index = -1;
+        o.gather = true;
+        status = std::max(status, veer::run_sweep_command(o));
+    } else {
+        status = veer::run_sweep_command(o);
+    }
     const double total =
         std::chrono::duration<double>(std::chrono::steady_clock::now() - t0).count();
 
     fmt::print(
         "turbulent sweep, {} (NACA 0012, Re 6e6, Spalart-Allmaras, 384 x 128), "
-        "2 threads:\n",
-        sweep_case.filename().string());
+        "2 threads, stability check {} time units, --set [{}]{}:\n",
+        sweep_case.filename().string(), o.stability_time, fmt::join(o.input.overrides, " "),
+        from_free_stream ? ", each point from the free stream" : "");
     fmt::print("{:>6} {:>9} {:>9} {:>9} {:>8} {:>8} {:>11} {:>8}\n", "alpha", "regime", "Cl", "Cd",
                "sep x/c", "St", "iterations", "wall s");
     for (const double a : veer::parse_sweep_angles(angles)) {
