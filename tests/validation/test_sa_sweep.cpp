@@ -1,0 +1,235 @@
+/// Spalart-Allmaras angle-of-attack sweep of NACA 0012 at Re = 6e6, fully turbulent, run as
+/// `veer sweep` runs it (run_sweep_command on the shipped case cases/wind-turbine-sweep-sa.toml:
+/// the steady attempts, the stall detector, the polar figures of summary.json),
+/// against experiment:
+/// - Ladson, C. L. (1988) NASA TM-4074, M = 0.15, Re = 6e6, 80-grit trip [P], as distributed by
+///   the NASA Turbulence Modeling Resource (../shared/reference/ladson1988_naca0012.csv); its
+///   least-squares lift slopes [D] in that file's header: 0.1080/deg over -4..4 deg, 0.1074/deg
+///   over -4..10 deg.
+/// - McCroskey, W. J. (1987) NASA TM-100019, best fit of the lift slope at Re = 6e6, M = 0.15:
+///   0.1075/deg [D] (../shared/reference/tmr_naca0012_sa.md).
+///
+/// Mach number: the experiment ran at M = 0.15; veer is incompressible. Our Cl and lift slope
+/// are multiplied by the Prandtl-Glauert factor 1 / sqrt(1 - 0.15^2) = 1.0114 before every
+/// comparison (a small-angle correction, as in test_sa_naca0012.cpp).
+///
+/// Stall: not gated. Ladson's Cl max (about 1.61-1.63 near 17 deg, 80/120/180 grit) comes from a
+/// flow that is not two-dimensional near stall (the csv's own warning), and the model's maximum
+/// depends on the grid here (below): the test only asks that the sweep finds a maximum (Cl falls
+/// at a higher angle) past the linear range and prints how it compares.
+///
+/// Workarounds, stated rather than hidden (each reported as a defect of the shipped sweep):
+/// - Every point starts from the free stream (the job-array form: --point-index K for each K,
+///   then --gather), not from the previous point. Started from a converged neighbour, a point's
+///   residual references are the largest of its own first 20 steps, and the nu_tilde residual
+///   then levels off at about 0.2 of that reference (384 x 128 grid, alpha 2 from alpha 0: 6.8e-7
+///   against 3.3e-6 from step 2000 on, while the u residual falls by four orders and Cl changes by
+///   1e-7 per 100 steps), so no allowed residual_drop (1e-14 to 0.1) is reached: the point runs to
+///   the step cap and goes time-accurate.
+/// - run.residual_drop = 1e-2 (the default is 1e-6). From the free stream at alpha = 0 the
+///   nu_tilde residual falls by only about a factor 0.75 per 1000 iterations after the first
+///   thousand (8.5e-4 of its reference at the 8000-step cap, while u, v and continuity are 1e-8
+///   below theirs and Cd is settled to 1e-7). Convergence is then set by Cl and Cd settling
+///   over 100 steps (force_tolerance, next item). Measured on 384 x 128 with the force criterion
+///   at its default: Cl 1.07441, Cd 0.01260 at 10 deg, as the fully converged run of
+///   bench_turbulent (1.0744, 0.01260); Cd 0.00822 at 0 deg against 0.00819 at 1e-3.
+/// - run.force_tolerance = 5e-5 (the default is 1e-5). At alpha = 12 on the 384 x 128 grid the
+///   steady iteration ends in a two-step cycle at the default pseudo CFL 3: every residual flat
+///   from step 1000 on (u 1.2e-4 of its reference), Cl alternating between 1.26447 and 1.26448,
+///   Cd between 0.015403 and 0.015419 (a spread of 1.6e-5), so the 1e-5 force criterion is never
+///   met and the stall detector would send the point time-accurate. 5e-5 accepts that cycle (a
+///   thousandth of a percent of Cl) and nothing that the bands below could feel.
+/// - stability_time = 0: the disturbed time-accurate check of separated points takes about 10^4
+///   physical steps on this y+ 1 grid (time step 5.8e-4 chords / U at CFL 0.8, about 4.5 steps a
+///   second on 2 threads), more than the whole budget of this test. The points past the
+///   trailing-edge separation onset are therefore the steady model's solutions, as a steady SA
+///   computation gives them.
+///
+/// Grid: the case's 384 x 128 grid coarsened to 256 x 96 (192 cells on the surface, 32 along each
+/// side of the wake cut, 96 normal; first cell still at y+ 1, far field 100 chords), for cost.
+/// Measured against the 384 x 128 sweep of app/SWEEPS.md ("A measured turbulent sweep"), same
+/// settings: Cl 0.44163 / 0.44184 at 4 deg, 0.86792 / 0.87065 at 8, 1.0661 / 1.0744 at 10 (0.8 %
+/// lower), 1.40899 / 1.43350 at 14; lift slope 0.10686 / 0.10586 per degree (over 0..10 here,
+/// 0..12 there). Near stall the two grids part: 1.4461 / 1.6080 at 18 deg, where the coarse
+/// grid's upper surface separates from x/c 0.41 and the fine grid's from 0.58; the coarse grid
+/// stalls between 18 and 20 deg at a lower Cl. Cl max is therefore printed, not gated (as
+/// Ladson's data ask anyway).
+///
+/// How the model's stall compares with the experiment: Ladson's Cl rises to about 1.61-1.63 at
+/// 17 deg and drops abruptly to about 1.0 at 18 deg (all three grits). The steady model on the
+/// 384 x 128 grid reaches 1.608 at 18 deg (x 1.0114 = 1.626, within the measured maximum) and
+/// drops to 1.061 at 20 deg (each point from the free stream): about the measured Cl max and
+/// post-stall level, one to three degrees later. On this grid it peaks lower (1.446 at 18 deg,
+/// x 1.0114 = 1.463) and drops as abruptly (0.922 at 20 deg).
+///
+/// Cost: eight points, 130 s on 2 threads of the shared 2-core machine (load 3.7 to 4.7).
+/// Labelled validation (the folder).
+#include <gtest/gtest.h>
+
+#include <algorithm>
+#include <cmath>
+#include <filesystem>
+#include <fstream>
+#include <iostream>
+#include <nlohmann/json.hpp>
+#include <sstream>
+#include <string>
+#include <vector>
+
+#include "app/commands.hpp"
+#include "app/sweep_angles.hpp"
+#include "app/sweep_record.hpp"
+#include "io/json_writer.hpp"
+
+namespace veer {
+namespace {
+namespace fs = std::filesystem;
+
+const double prandtl_glauert = 1.0 / std::sqrt(1.0 - 0.15 * 0.15);
+
+// The sweep: the linear range (0, 4, 8), the end of it (10), and far enough past the maximum of
+// the steady model for Cl to fall (on 384 x 128 Cl still rises at 18 deg: 1.5668 at 16, 1.598
+// at 18).
+constexpr const char* sweep_angles = "0,4,8,10,14,18,20,22";
+
+/// One (alpha, cl) row of the Ladson (1988) csv for one grit.
+struct MeasuredPoint {
+    double alpha, cl;
+};
+
+std::vector<MeasuredPoint> ladson_points(int grit) {
+    std::ifstream in(fs::path(VEER_REFERENCE_DIR) / "ladson1988_naca0012.csv");
+    std::vector<MeasuredPoint> out;
+    bool header = true;
+    for (std::string line; std::getline(in, line);) {
+        if (line.empty() || line[0] == '#') continue;
+        if (header) {  // grit,alpha_deg,cl,cd
+            header = false;
+            continue;
+        }
+        std::stringstream row(line);
+        std::string cell[4];
+        for (std::string& c : cell) std::getline(row, c, ',');
+        if (std::stoi(cell[0]) == grit) out.push_back({std::stod(cell[1]), std::stod(cell[2])});
+    }
+    std::sort(out.begin(), out.end(),
+              [](const MeasuredPoint& a, const MeasuredPoint& b) { return a.alpha < b.alpha; });
+    return out;
+}
+
+/// Linear interpolation in the measured points (the angle must lie inside them).
+double interpolate_cl(const std::vector<MeasuredPoint>& points, double alpha) {
+    for (std::size_t k = 1; k < points.size(); ++k)
+        if (points[k].alpha >= alpha) {
+            const MeasuredPoint& a = points[k - 1];
+            const MeasuredPoint& b = points[k];
+            return a.cl + (b.cl - a.cl) * (alpha - a.alpha) / (b.alpha - a.alpha);
+        }
+    ADD_FAILURE() << "alpha " << alpha << " outside the measured points";
+    return NAN;
+}
+
+class SaSweep : public ::testing::Test {
+protected:
+    static void SetUpTestSuite() {
+        work = fs::temp_directory_path() / "veer_validation_sa_sweep";
+        fs::remove_all(work);
+        SweepOptions o;
+        o.input.case_file = fs::path(VEER_SOURCE_DIR) / "cases" / "wind-turbine-sweep-sa.toml";
+        o.input.overrides = {"mesh.around=192", "mesh.wake=32", "mesh.normal=96",
+                             "run.residual_drop=1e-2", "run.force_tolerance=5e-5"};
+        o.alpha = sweep_angles;
+        o.out_dir = work / "sweep";
+        o.quiet = true;
+        o.stability_time = 0.0;
+        // A guard on the cost only: a point that does not settle is run time-accurately for 2
+        // chords / U (about 3400 steps), enough for its record, not for cycle statistics.
+        o.unsteady_time = 2.0;
+        const long count = static_cast<long>(parse_sweep_angles(sweep_angles).size());
+        status = 0;
+        for (o.point_index = 0; o.point_index < count; ++o.point_index)
+            status = std::max(status, run_sweep_command(o));
+        o.point_index = -1;
+        o.gather = true;  // polar.csv and summary.json from the point folders
+        status = std::max(status, run_sweep_command(o));
+        for (const double a : parse_sweep_angles(sweep_angles)) {
+            const fs::path p = record_path(o.out_dir / point_folder_name(a));
+            records.push_back(record_from_json(read_json_file(p), p.string()));
+            const PointRecord& r = records.back();
+            std::cout << "alpha " << r.alpha << ": " << r.regime << ", Cl " << r.cl
+                      << " (x 1.0114 = " << prandtl_glauert * r.cl << "), Cd " << r.cd
+                      << ", upper separation "
+                      << (r.separation_upper ? std::to_string(*r.separation_upper)
+                                             : std::string("none"))
+                      << ", " << r.iterations << " iterations, " << r.wall_seconds << " s"
+                      << (r.note.empty() ? "" : " -- " + r.note) << "\n";
+        }
+        summary = read_json_file(o.out_dir / "summary.json");
+        std::cout << "summary: " << summary.dump() << "\n";
+    }
+    static void TearDownTestSuite() { fs::remove_all(work); }
+
+    static const PointRecord& at(double alpha) {
+        for (const PointRecord& r : records)
+            if (r.alpha == alpha) return r;
+        throw std::runtime_error("no point at alpha " + std::to_string(alpha));
+    }
+
+    static inline fs::path work;
+    static inline int status = -1;
+    static inline std::vector<PointRecord> records;
+    static inline nlohmann::json summary;
+};
+
+TEST_F(SaSweep, EveryPointHasASteadyResult) {
+    EXPECT_EQ(status, 0);
+    for (const PointRecord& r : records) EXPECT_EQ(r.regime, "steady") << r.alpha << ": " << r.note;
+}
+
+TEST_F(SaSweep, LiftSlopeMatchesLadsonAndMcCroskey) {
+    ASSERT_FALSE(summary["lift_slope_per_deg"].is_null());
+    const double slope = prandtl_glauert * summary["lift_slope_per_deg"].get<double>();
+    const double range_end = summary["linear_range"]["alpha_max"].get<double>();
+    // The linear range starts at 0 (a symmetric section: 0..A is -A..A mirrored). Ladson's
+    // -4..4 fit for a range that ends at 4 deg or below, his -4..10 fit for one that reaches
+    // further (the closer of his two ranges).
+    const double ladson = range_end <= 4.0 ? 0.1080 : 0.1074;  // Ladson 1988 [D], csv header
+    const double mccroskey = 0.1075;                           // McCroskey 1987, NASA TM-100019 [D]
+    std::cout << "lift slope x 1.0114 = " << slope << "/deg over 0.." << range_end
+              << " deg; Ladson " << ladson << ", McCroskey " << mccroskey << "\n";
+    // The linear range must reach past the first interval: a slope of two points is no test.
+    EXPECT_GE(range_end, 8.0);
+    // 3 %: the steady model itself, grid-converged, lies above the measurements by about 1.8 %
+    // (the TMR SA mean Cl 1.0935 at 10 deg, tmr_naca0012_sa.md, is 0.1094/deg over 0..10,
+    // against McCroskey's 0.1075 and Ladson's 0.1074); the rest, 1.2 %, is for the grid (this
+    // grid's Cl at 10 deg is 1.4 % below the TMR mean after Prandtl-Glauert) and the fitting
+    // range, and it is wider than the scatter of the two experimental fits (0.6 %).
+    EXPECT_NEAR(slope, ladson, 0.03 * ladson);
+    EXPECT_NEAR(slope, mccroskey, 0.03 * mccroskey);
+}
+
+TEST_F(SaSweep, LiftAtTenDegreesMatchesLadson) {
+    const double cl = prandtl_glauert * at(10.0).cl;
+    // Ladson 1988, 80 grit, linear between his 8.30 and 10.12 deg points [P].
+    const double measured = interpolate_cl(ladson_points(80), 10.0);
+    std::cout << "Cl(10 deg) x 1.0114 = " << cl << "; Ladson 80 grit " << measured << "\n";
+    // 5 %: the grid-converged SA answer at 10 deg (TMR, 1.0912, tmr_naca0012_sa.md) is itself
+    // 3.1 % above this measurement, and the trip (80, 120, 180 grit) moves the measured Cl at
+    // 10 deg by about 0.9 % (1.059 to 1.067 interpolated): the band holds the model's own
+    // difference from the experiment and a 2 % grid allowance, not more.
+    EXPECT_NEAR(cl, measured, 0.05 * measured);
+}
+
+TEST_F(SaSweep, FindsALiftMaximum) {
+    ASSERT_FALSE(summary["cl_max"].is_null());
+    const double cl_max = prandtl_glauert * summary["cl_max"].get<double>();
+    const double alpha_max = summary["alpha_cl_max"].get<double>();
+    std::cout << "Cl max x 1.0114 = " << cl_max << " at " << alpha_max
+              << " deg; Ladson 1988 (not 2D near stall, not gated): about 1.61-1.63 near 17 deg\n";
+    EXPECT_TRUE(summary["stall_in_range"].get<bool>()) << "Cl does not fall after its maximum";
+    // The maximum must lie past the linear range, where the experiment still rises.
+    EXPECT_GT(alpha_max, 10.0);
+}
+
+}  // namespace
+}  // namespace veer
