@@ -177,7 +177,7 @@ nlohmann::json summary_json(const Simulation& sim, const RunResult& r, const Run
     return s;
 }
 
-void write_run_report(const Simulation& sim, const RunResult& r) {
+void write_run_report(const Simulation& sim, const RunResult& r, ClosingTable table) {
     const std::filesystem::path dir = sim.checkpoint_path().parent_path();
     if (!sim.grid().c_layout()) {  // verification blocks: no section, no forces
         write_json_file(dir / "summary.json", {{"converged", r.status == RunStatus::converged},
@@ -190,7 +190,7 @@ void write_run_report(const Simulation& sim, const RunResult& r) {
     write_wake_csv(dir / "wake.csv", a.wake);
     write_surface_vtp_file(dir / "surface.vtp", a.surface);
     write_json_file(dir / "summary.json", summary_json(sim, r, a));
-    print_closing_table(sim.spec(), a);
+    if (table == ClosingTable::print) print_closing_table(sim.spec(), a);
 }
 
 }  // namespace veer

@@ -32,7 +32,12 @@ RunAnalysis analyse_run(const Simulation& sim);
 /// The summary.json object of a run.
 nlohmann::json summary_json(const Simulation& sim, const RunResult& result, const RunAnalysis& a);
 
-/// Writes the run's report files into its folder and prints the closing table.
-void write_run_report(const Simulation& sim, const RunResult& result);
+/// Whether write_run_report prints the closing table (a quiet sweep keeps to one line a point).
+enum class ClosingTable { print, omit };
+
+/// Writes the run's report files into its folder and, unless told not to, prints the closing
+/// table.
+void write_run_report(const Simulation& sim, const RunResult& result,
+                      ClosingTable table = ClosingTable::print);
 
 }  // namespace veer

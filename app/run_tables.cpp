@@ -12,6 +12,10 @@
 namespace veer {
 namespace {
 
+/// Below this |Cl| the disagreement is given without a percentage (a thousandth of the lift of
+/// one degree on a thin section, 2 pi per radian: common practice for "no lift").
+constexpr double near_zero_lift = 1e-4;
+
 std::string surface_rows(const std::vector<SurfacePoint>& side, const char* name) {
     std::string out;
     for (const SurfacePoint& p : side)
@@ -73,8 +77,12 @@ void print_closing_table(const CaseSpec& spec, const RunAnalysis& a) {
         fmt::print("  {:<34} {:>10.5f} {:>10} {:>+10.5f}\n",
                    fmt::format("circulation at {:.2f} chords", c.contour.distance), c.cl, "",
                    c.cl - cl);
-    fmt::print("  largest surface/control-volume disagreement: {:.5f} ({:.2f}% of Cl)\n", worst,
-               std::abs(cl) > 1e-12 ? 100 * worst / std::abs(cl) : 0.0);
+    // A percentage of a lift near zero (a symmetric section at zero incidence) says nothing.
+    if (std::abs(cl) >= near_zero_lift)
+        fmt::print("  largest surface/control-volume disagreement: {:.5f} ({:.2f}% of Cl)\n", worst,
+                   100 * worst / std::abs(cl));
+    else
+        fmt::print("  largest surface/control-volume disagreement: {:.5f} (Cl near zero)\n", worst);
     fmt::print(
         "  Cm (quarter chord) {:.5f}; Kutta check: Cp upper {:.4f}, lower {:.4f} at the "
         "trailing edge\n",

@@ -119,7 +119,8 @@ RunPiece run_piece(const CaseSpec& spec, const StructuredGrid& grid, const fs::p
     if (start) p.sim->start_from(*start);
     p.result = p.sim->run();
     if (p.result.status != RunStatus::diverged && p.result.status != RunStatus::interrupted)
-        write_run_report(*p.sim, p.result);
+        write_run_report(*p.sim, p.result,
+                         sweep.progress ? ClosingTable::print : ClosingTable::omit);
     return p;
 }
 
