@@ -41,15 +41,11 @@ std::optional<SweepPlan> read_sweep_plan(const fs::path& sweep_dir) {
 
 GatheredPoints gather_point_records(const fs::path& sweep_dir, const SweepPlan& plan) {
     GatheredPoints g;
-    std::error_code ec;
     for (double a : plan.angles) {
-        const fs::path dir = sweep_dir / point_folder_name(a);
-        if (!fs::exists(record_path(dir), ec)) {
+        if (std::optional<PointRecord> r = read_point_record(sweep_dir / point_folder_name(a)))
+            g.records.push_back(std::move(*r));
+        else
             g.missing.push_back(a);
-            continue;
-        }
-        g.records.push_back(
-            record_from_json(read_json_file(record_path(dir)), record_path(dir).string()));
     }
     return g;
 }

@@ -89,16 +89,20 @@ std::filesystem::path record_path(const std::filesystem::path& point_dir) {
     return point_dir / "sweep_point.json";
 }
 
+std::optional<PointRecord> read_point_record(const std::filesystem::path& point_dir) {
+    std::error_code ec;
+    const std::filesystem::path record = record_path(point_dir);
+    if (!std::filesystem::exists(record, ec)) return std::nullopt;
+    return record_from_json(read_json_file(record), record.string());
+}
+
 std::optional<PointRecord> finished_point(const std::filesystem::path& point_dir,
                                           const std::string& case_text) {
     std::error_code ec;
-    if (!std::filesystem::exists(point_dir / "summary.json", ec) ||
-        !std::filesystem::exists(record_path(point_dir), ec))
-        return std::nullopt;
+    if (!std::filesystem::exists(point_dir / "summary.json", ec)) return std::nullopt;
     try {
-        PointRecord r = record_from_json(read_json_file(record_path(point_dir)),
-                                         record_path(point_dir).string());
-        if (r.case_text != case_text) return std::nullopt;
+        std::optional<PointRecord> r = read_point_record(point_dir);
+        if (!r || r->case_text != case_text) return std::nullopt;
         return r;
     } catch (const InputError&) {
         return std::nullopt;  // a damaged record: the point is run again

@@ -40,6 +40,10 @@ PointRecord record_from_json(const nlohmann::json& j, const std::string& source)
 /// The record file of a point folder.
 std::filesystem::path record_path(const std::filesystem::path& point_dir);
 
+/// The record in a point folder, whatever case it belongs to; nullopt when the folder has none.
+/// Throws InputError naming the file when the record is damaged.
+std::optional<PointRecord> read_point_record(const std::filesystem::path& point_dir);
+
 /// The record of a finished point: its folder holds summary.json and a record of the same case
 /// text; nullopt otherwise (missing, unreadable or another case).
 std::optional<PointRecord> finished_point(const std::filesystem::path& point_dir,

@@ -7,7 +7,6 @@
 //   bench_sweep [WORK_DIR]     (default: a folder under the system temp dir, removed after)
 #include <fmt/format.h>
 #include <omp.h>
-#include <unistd.h>
 
 #include <chrono>
 #include <cstdlib>
@@ -17,6 +16,8 @@
 #include "app/commands.hpp"
 #include "app/sweep_angles.hpp"
 #include "app/sweep_record.hpp"
+#include "app/wait_policy.hpp"
+#include "bench/sweep_point_table.hpp"
 #include "io/json_writer.hpp"
 
 namespace {
@@ -30,9 +31,7 @@ constexpr const char* default_grid_case =
 }  // namespace
 
 int main(int argc, char** argv) {
-    // Passive OpenMP waits, as `veer` itself runs (app/main.cpp): read when the runtime loads.
-    if (std::getenv("OMP_WAIT_POLICY") == nullptr && setenv("OMP_WAIT_POLICY", "PASSIVE", 0) == 0)
-        execv("/proc/self/exe", argv);
+    veer::restart_with_passive_waits(argv);
     const bool keep = argc > 1;
     const fs::path work = keep ? fs::path(argv[1]) : fs::temp_directory_path() / "veer_bench_sweep";
     if (!keep) fs::remove_all(work);
@@ -52,20 +51,7 @@ int main(int argc, char** argv) {
         std::chrono::duration<double>(std::chrono::steady_clock::now() - t0).count();
 
     fmt::print("laminar sweep, NACA 0012, Re 1000, default grid, 2 threads:\n");
-    fmt::print("{:>6} {:>9} {:>9} {:>9} {:>8} {:>11} {:>8}\n", "alpha", "regime", "Cl", "Cd", "St",
-               "iterations", "wall s");
-    for (const double a : veer::parse_sweep_angles("0:20:2")) {
-        const fs::path record = veer::record_path(o.out_dir / veer::point_folder_name(a));
-        if (!fs::exists(record)) {
-            fmt::print("{:>6.1f} missing\n", a);
-            continue;
-        }
-        const veer::PointRecord r =
-            veer::record_from_json(veer::read_json_file(record), record.string());
-        fmt::print("{:>6.1f} {:>9} {:>9.4f} {:>9.4f} {:>8} {:>11} {:>8.1f}\n", r.alpha, r.regime,
-                   r.cl, r.cd, r.strouhal ? fmt::format("{:.3f}", *r.strouhal) : "-", r.iterations,
-                   r.wall_seconds);
-    }
+    veer::bench::print_point_table(o.out_dir, "0:20:2");
     fmt::print("total {:.1f} s ({:.1f} min; target < 10 min), sweep exit status {}\n", total,
                total / 60, status);
     if (!keep) fs::remove_all(work);

@@ -27,6 +27,7 @@
 #include "app/sweep_angles.hpp"
 #include "app/sweep_record.hpp"
 #include "app/wait_policy.hpp"
+#include "bench/sweep_point_table.hpp"
 #include "io/json_writer.hpp"
 
 namespace {
@@ -88,23 +89,7 @@ int main(int argc, char** argv) {
         "2 threads, stability check {} time units, --set [{}]{}:\n",
         sweep_case.filename().string(), o.stability_time, fmt::join(o.input.overrides, " "),
         from_free_stream ? ", each point from the free stream" : "");
-    fmt::print("{:>6} {:>9} {:>9} {:>9} {:>8} {:>8} {:>11} {:>8}\n", "alpha", "regime", "Cl", "Cd",
-               "sep x/c", "St", "iterations", "wall s");
-    for (const double a : veer::parse_sweep_angles(angles)) {
-        const fs::path record = veer::record_path(o.out_dir / veer::point_folder_name(a));
-        if (!fs::exists(record)) {
-            fmt::print("{:>6.1f} missing\n", a);
-            continue;
-        }
-        const veer::PointRecord r =
-            veer::record_from_json(veer::read_json_file(record), record.string());
-        const auto optional = [](const std::optional<double>& x) {
-            return x ? fmt::format("{:.3f}", *x) : std::string("-");
-        };
-        fmt::print("{:>6.1f} {:>9} {:>9.4f} {:>9.5f} {:>8} {:>8} {:>11} {:>8.1f}  {}\n", r.alpha,
-                   r.regime, r.cl, r.cd, optional(r.trailing_edge_separation_upper),
-                   optional(r.strouhal), r.iterations, r.wall_seconds, r.note);
-    }
+    veer::bench::print_point_table(o.out_dir, angles);
     const fs::path summary = o.out_dir / "summary.json";
     if (fs::exists(summary)) {
         const nlohmann::json s = veer::read_json_file(summary);
