@@ -14,10 +14,15 @@ struct SpalartAllmarasSettings {
     double free_stream_ratio = 3.0;
     bool second_order_convection = true;  ///< van Leer deferred correction (else first order)
     int sweeps = 2;                       ///< line-relaxation sweeps per step
-    /// Steady: nu_tilde's pseudo-time step = scale x the flow's local step. The nu_tilde step is
-    /// implicit and positivity-keeping, so it takes larger steps than the flow: 10 brought the
-    /// nu_tilde residual down about 3x faster than 1 on a NACA 0012 at Re 6e6 (192 x 64 cells).
-    double time_step_scale = 10.0;
+    /// Steady: nu_tilde's pseudo-time step = scale x the flow's local step (the converged state
+    /// does not depend on it). 10 left a two-step odd-even cycle of nu_tilde at the outer edge
+    /// of the wake (NACA 0012, Re 6e6, alpha 15, 384 x 128: x 6-10 chords, y 0.6-1.2, nu_tilde
+    /// changing by 1e-2 of itself every step, no cell below zero; pseudo CFL 2), so its residual
+    /// fell only 12% per 100 steps (1.3e-6 of its reference after 4400 steps). With 3 that case
+    /// converges in 1727 steps, alpha 15 on 512 x 160 (pseudo CFL 3) in 1698, alpha 10 on
+    /// 384 x 128 in 1348 (1334 with 10). Probably the explicit parts (deferred-correction
+    /// convection, production) bound the stable step.
+    double time_step_scale = 3.0;
     /// Off only in the transport-operator verification (manufactured solutions).
     bool model_sources = true;
     /// Value on prescribed-velocity faces (manufactured solutions); empty: 0 (moving walls).
