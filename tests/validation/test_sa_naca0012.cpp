@@ -26,10 +26,10 @@
 #include <algorithm>
 #include <chrono>
 #include <cmath>
-#include <deque>
 #include <iostream>
 #include <map>
 
+#include "app/convergence.hpp"
 #include "mesh/cgrid.hpp"
 #include "mesh/grid_metrics.hpp"
 #include "mesh/naca.hpp"
@@ -68,9 +68,9 @@ struct AirfoilResult {
     SurfaceForces forces;
 };
 
-/// Steady run to the criteria of `veer run`'s monitor: every residual (u, v, continuity,
-/// nu_tilde) 1e-6 of its reference (the largest of the first 20 steps), and Cl, Cd changed by
-/// less than 1e-5 over the last 100 steps.
+/// Steady run to the criteria of `veer run`'s monitor (its own ConvergenceMonitor): every residual
+/// (u, v, continuity, nu_tilde) 1e-6 of its reference (the largest of the first 20 steps), and Cl,
+/// Cd changed by less than 1e-5 over the last 100 steps.
 AirfoilResult run_airfoil(const StructuredGrid& grid, double alpha, long max_steps) {
     SolverSettings s;
     s.mode = TimeMode::steady;
@@ -80,29 +80,15 @@ AirfoilResult run_airfoil(const StructuredGrid& grid, double alpha, long max_ste
     FlowSolver solver(grid, conditions, s);
     const GridMetrics metrics = compute_metrics(grid);
     AirfoilResult out;
-    double reference[4] = {0.0, 0.0, 0.0, 0.0};
-    std::deque<double> cl, cd;
+    ConvergenceMonitor monitor{ConvergenceCriteria{}};  // veer run's defaults
     for (long n = 0; n < max_steps && !out.converged; ++n) {
         const StepReport r = solver.advance_pseudo_time();
         if (!r.finite) break;
-        const double res[4] = {r.residual_u, r.residual_v, r.residual_continuity,
-                               r.residual_nu_tilde};
-        double worst = 0.0;
-        for (int k = 0; k < 4; ++k) {
-            if (n < 20) reference[k] = std::max(reference[k], res[k]);
-            worst = std::max(worst, res[k] / reference[k]);
-        }
         out.forces = integrate_surface_forces(grid, metrics, solver.fields(), conditions);
-        cl.push_back(out.forces.cl.total);
-        cd.push_back(out.forces.cd.total);
-        if (cl.size() > 101) cl.pop_front(), cd.pop_front();
-        auto spread = [](const std::deque<double>& d) {
-            const auto [lo, hi] = std::minmax_element(d.begin(), d.end());
-            return *hi - *lo;
-        };
         out.steps = n + 1;
         out.converged =
-            n >= 20 && worst < 1e-6 && cl.size() == 101 && std::max(spread(cl), spread(cd)) < 1e-5;
+            monitor.add({r.residual_u, r.residual_v, r.residual_continuity, out.forces.cl.total,
+                         out.forces.cd.total, r.residual_nu_tilde});
     }
     out.seconds = std::chrono::duration<double>(std::chrono::steady_clock::now() - start).count();
     return out;
