@@ -7,6 +7,7 @@
 #include "mesh/geometric_stretching.hpp"
 #include "mesh/normal_marching.hpp"
 #include "mesh/wake_cut.hpp"
+#include "mesh/wake_spacing.hpp"
 
 namespace veer {
 namespace {
@@ -97,6 +98,7 @@ StructuredGrid generate_cgrid(const std::vector<Vec2>& surface, const CGridSpec&
                    geometric_steps(spec.first_cell, spec.far_field, spec.normal)};
     const MarchOutcome outcome = march_layers(grid, plan);
     if (outcome.folded) throw InputError(describe_fold(outcome, spec));
+    open_wake_spacing(grid, spec.wake, spec.first_cell, spec.wake_aspect);
     fill_segments(grid, spec.wake, spec.around);
     return grid;
 }

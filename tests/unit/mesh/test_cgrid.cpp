@@ -2,6 +2,7 @@
 // here from the nodes (not by the code under test).
 #include <gtest/gtest.h>
 
+#include <algorithm>
 #include <chrono>
 #include <cmath>
 #include <numbers>
@@ -9,6 +10,7 @@
 #include <tuple>
 
 #include "mesh/cgrid.hpp"
+#include "mesh/geometric_stretching.hpp"
 #include "mesh/grid_metrics.hpp"
 #include "mesh/grid_quality.hpp"
 #include "tests/unit/mesh/cgrid_test_support.hpp"
@@ -80,9 +82,9 @@ TEST_P(CGridCase, WallLinesAreOrthogonalAwayFromTheTrailingEdge) {
     EXPECT_LT(worst, 1e-6);
 }
 
-TEST_P(CGridCase, EveryJLineGrowsByTheOneRatio) {
+TEST_P(CGridCase, EveryJLineOffTheSurfaceGrowsByTheOneRatio) {
     const double r = normal_growth_ratio(spec);
-    for (int i = 0; i <= grid.ni(); ++i) {
+    for (int i = spec.wake; i <= spec.wake + spec.around; ++i) {
         double length = 0.0;
         for (int j = 0; j < grid.nj(); ++j) {
             const double step = norm(grid.node(i, j + 1) - grid.node(i, j));
@@ -93,6 +95,60 @@ TEST_P(CGridCase, EveryJLineGrowsByTheOneRatio) {
         }
         EXPECT_NEAR(length, spec.far_field, 1e-8 * spec.far_field);
     }
+}
+
+TEST_P(CGridCase, WakeLinesOpenWithTheStreamwiseSpacing) {
+    const int ni = grid.ni(), nj = grid.nj();
+    int opened = 0;
+    for (int i = 0; i < spec.wake; ++i) {
+        const double ahead = norm(grid.node(i + 1, 0) - grid.node(i, 0));
+        const double behind = i > 0 ? norm(grid.node(i, 0) - grid.node(i - 1, 0)) : ahead;
+        const double first = std::max(spec.first_cell, 0.5 * (ahead + behind) / spec.wake_aspect);
+        opened += first > spec.first_cell;
+        for (const int line : {i, ni - i}) {
+            // First step as asked, then one ratio all the way out (chords, set by bisection).
+            const double h = norm(grid.node(line, 1) - grid.node(line, 0));
+            EXPECT_NEAR(h, first, 1e-12 * first) << "line " << line;
+            const double r = norm(grid.node(line, 2) - grid.node(line, 1)) / h;
+            for (int j = 1; j < nj; ++j) {
+                const double ratio = norm(grid.node(line, j + 1) - grid.node(line, j)) /
+                                     norm(grid.node(line, j) - grid.node(line, j - 1));
+                EXPECT_NEAR(ratio, r, 1e-9) << line << "," << j;
+            }
+        }
+    }
+    // The far wake cells (chords long) do open; those next to the trailing edge do not.
+    EXPECT_GT(opened, 0);
+    EXPECT_LT(opened, spec.wake);
+}
+
+TEST_P(CGridCase, OpeningTheWakeMovesOnlyInnerWakeNodes) {
+    CGridSpec closed = spec;
+    closed.wake_aspect = 1e30;  // no wake cell is that long: the marched grid as it was
+    const StructuredGrid marched = generate_cgrid(surface, closed);
+    const int ni = grid.ni(), nj = grid.nj();
+    for (int i = 0; i <= ni; ++i) {
+        const bool wake_line = i < spec.wake || i > ni - spec.wake;
+        for (int j = 0; j <= nj; ++j) {
+            if (wake_line && j > 0 && j < nj) continue;
+            EXPECT_EQ(grid.node(i, j).x, marched.node(i, j).x) << i << "," << j;
+            EXPECT_EQ(grid.node(i, j).y, marched.node(i, j).y) << i << "," << j;
+        }
+    }
+}
+
+TEST_P(CGridCase, FirstWakeCellsGrowSmoothlyDownstream) {
+    double worst = 0.0, wake_stretch = 0.0;
+    for (int i = 1; i < spec.wake; ++i) {
+        const double h = norm(grid.node(i, 1) - grid.node(i, 0));
+        const double h_next = norm(grid.node(i + 1, 1) - grid.node(i + 1, 0));
+        worst = std::max(worst, h / h_next);
+        wake_stretch = std::max(wake_stretch, norm(grid.node(i, 0) - grid.node(i - 1, 0)) /
+                                                  norm(grid.node(i + 1, 0) - grid.node(i, 0)));
+    }
+    // No faster than the wake cut's own streamwise stretching (plus round-off).
+    EXPECT_LE(worst, wake_stretch * (1.0 + 1e-9));
+    EXPECT_GE(worst, 1.0);
 }
 
 TEST_P(CGridCase, WakeCutNodesCoincideExactly) {
