@@ -34,6 +34,11 @@ bool ConvergenceMonitor::add(const ConvergenceSample& s) {
     return m_relative <= m_criteria.residual_drop && force_change() <= m_criteria.force_tolerance;
 }
 
+void ConvergenceMonitor::raise_references(const std::array<double, residual_count>& floor) {
+    for (int k = 0; k < residual_count; ++k)
+        m_reference[k] = std::max(m_reference[k], floor[static_cast<std::size_t>(k)]);
+}
+
 double ConvergenceMonitor::force_change() const {
     if (static_cast<int>(m_cl.size()) <= m_criteria.force_window)
         return std::numeric_limits<double>::infinity();

@@ -3,6 +3,7 @@
 /// reference (the largest of the first steps) and Cl, Cd settled over a window of steps. The
 /// residuals are those of every equation solved: u, v, continuity and, with a turbulence model,
 /// nu_tilde (a residual that stays 0, as nu_tilde's does in laminar runs, is left out).
+#include <array>
 #include <deque>
 #include <vector>
 
@@ -27,6 +28,14 @@ class ConvergenceMonitor {
 public:
     explicit ConvergenceMonitor(ConvergenceCriteria criteria) : m_criteria(criteria) {}
 
+    static constexpr int residual_count = 4;  ///< u, v, continuity, nu_tilde
+
+    /// Raises the references to at least `floor` (u, v, continuity, nu_tilde). A run started
+    /// from another solution (a sweep's previous point) has small residuals of its own at the
+    /// start; held to a fraction of those, it would chase round-off. Raised to the residuals of
+    /// a start from the free stream, it meets the criterion of a single run.
+    void raise_references(const std::array<double, residual_count>& floor);
+
     /// Records a step; returns true once both criteria hold.
     bool add(const ConvergenceSample& s);
 
@@ -46,8 +55,6 @@ public:
     bool legacy_record() const { return m_legacy; }
     /// Steps recorded so far (restarts included).
     long count() const { return m_count; }
-
-    static constexpr int residual_count = 4;  ///< u, v, continuity, nu_tilde
 
 private:
     ConvergenceCriteria m_criteria;

@@ -6,6 +6,7 @@
 #include <chrono>
 #include <cmath>
 
+#include "app/free_stream_reference.hpp"
 #include "app/history_log.hpp"
 #include "app/interrupt.hpp"
 #include "app/progress_line.hpp"
@@ -72,7 +73,13 @@ void Simulation::resume(const CheckpointData& checkpoint) {
     m_last_checkpoint_step = m_solver->step_count();
 }
 
-void Simulation::start_from(const FlowFields& initial) { m_solver->initialize(initial); }
+void Simulation::start_from(const FlowFields& initial) {
+    m_solver->initialize(initial);
+    if (is_steady(m_spec))
+        m_monitor.raise_references(free_stream_references(m_grid, m_spec.flow,
+                                                          solver_settings_for(m_spec),
+                                                          criteria_for(m_spec.run).reference_steps));
+}
 
 double Simulation::next_time_step() const {
     const double cfl = m_spec.run.cfl > 0 ? m_spec.run.cfl : default_unsteady_cfl;

@@ -53,7 +53,8 @@ public:
     void resume(const CheckpointData& checkpoint);
 
     /// Starts a new run from given fields on the same grid (e.g. the previous point of a sweep)
-    /// instead of the free stream.
+    /// instead of the free stream. A steady run is then held to the residual references of a
+    /// start from the free stream (free_stream_reference.hpp), as a single run is.
     void start_from(const FlowFields& initial);
 
     /// Steps until a stop criterion holds; writes the history, frames and checkpoints.

@@ -46,6 +46,28 @@ TEST(ConvergenceMonitor, LaminarRunsIgnoreTheZeroNuTildeResidual) {
     EXPECT_EQ(steps_to_converge(m, 1e-4, 0.0, 50), 6);
 }
 
+TEST(ConvergenceMonitor, RaisedReferencesJudgeAContinuedRun) {
+    // A run continued from a nearby solution: its own start residuals are 1e-2 of a fresh
+    // start's, and it levels off at 1e-4 of a fresh start's.
+    auto continued = [](ConvergenceMonitor& m) {
+        for (int n = 1; n <= 50; ++n) {
+            const double r = n <= 3 ? 1e-2 : 1e-4;
+            if (m.add({r, r, r, 0.5, 0.01, r})) return n;
+        }
+        return -1;
+    };
+    ConvergenceMonitor own(quick_criteria());
+    EXPECT_EQ(continued(own), -1);  // 1e-2 of its own start: short of the 1e-3 drop
+    ConvergenceMonitor raised(quick_criteria());
+    raised.raise_references({1.0, 1.0, 1.0, 1.0});
+    EXPECT_EQ(continued(raised), 6);
+    EXPECT_DOUBLE_EQ(raised.relative_residual(), 1e-4);
+    // Raising never lowers: a reference above the floor stays.
+    ConvergenceMonitor high(quick_criteria());
+    high.raise_references({1e-6, 1e-6, 1e-6, 1e-6});
+    EXPECT_EQ(continued(high), -1);
+}
+
 TEST(ConvergenceMonitor, SavedRecordContinuesExactly) {
     ConvergenceMonitor straight(quick_criteria()), first(quick_criteria());
     for (int n = 1; n <= 4; ++n) {
