@@ -17,7 +17,15 @@ namespace veer {
 namespace {
 
 constexpr const char* convergence_record = "simulation_convergence";
-constexpr double default_unsteady_cfl = 0.8;  // common practice for BDF2 with explicit convection
+/// Default CFL number of time-accurate runs. Convection is implicit (first-order upwind) with a
+/// lagged second-order correction, so the step is set by accuracy, not stability. Laminar: 4.
+/// Measured on NACA 0012, Re 1000, alpha 12, 256 x 64, shedding from the free stream to t = 24,
+/// the last 8 cycles: Strouhal 0.7603 / 0.7604 / 0.7617, mean Cl 0.4679 / 0.4683 / 0.4709, Cl
+/// amplitude 0.0579 / 0.0577 / 0.0587 at CFL 0.8 / 4 / 8 (12987 / 2607 / 1313 steps): 4 is within
+/// 0.1 % of 0.8 on the means and 0.3 % on the amplitude. With the Spalart-Allmaras model 0.8
+/// (common practice for BDF2 with lagged convection terms; larger steps not yet measured on y+ 1
+/// grids).
+double default_unsteady_cfl(const CaseSpec& spec) { return spec.model == "laminar" ? 4.0 : 0.8; }
 
 ConvergenceCriteria criteria_for(const RunSpec& run) {
     ConvergenceCriteria c;
@@ -82,7 +90,7 @@ void Simulation::start_from(const FlowFields& initial) {
 }
 
 double Simulation::next_time_step() const {
-    const double cfl = m_spec.run.cfl > 0 ? m_spec.run.cfl : default_unsteady_cfl;
+    const double cfl = m_spec.run.cfl > 0 ? m_spec.run.cfl : default_unsteady_cfl(m_spec);
     const double dt = m_solver->time_step_for_cfl(cfl);
     const double left = m_spec.run.end_time - m_solver->time();
     // Land on end_time exactly, without a sliver of a last step.

@@ -20,7 +20,7 @@
 ///   (first cell too: y+ 1, 4/3, 16/9), Cl and Cd with the grid convergence index of Celik et al.
 ///   2008 (test_sa_gci.hpp), printed as a table.
 /// Solver settings are SolverSettings' defaults, which are also `veer run`'s for these cases
-/// (pseudo CFL 3 with the model, solver_settings.hpp).
+/// (pseudo CFL 2 with the model, solver_settings.hpp).
 #include <gtest/gtest.h>
 
 #include <algorithm>
