@@ -35,7 +35,10 @@ struct SolverSettings {
 
     // Pressure increment.
     PressureSolverKind pressure_solver = PressureSolverKind::multigrid;
-    double pressure_tolerance = 1e-8;  ///< relative residual per solve, time-accurate
+    /// Relative residual per solve, time-accurate. 1e-6: against 1e-8 the same Strouhal number,
+    /// mean Cl and amplitude to four digits and the final Cl to 1e-8 (the case of
+    /// momentum_tolerance), 15 % less run time.
+    double pressure_tolerance = 1e-6;
     /// Relative residual per solve in steady mode: the converged state does not depend on it
     /// (at the fixed point the increment is zero), so a loose solve per pseudo step suffices.
     double steady_pressure_tolerance = 1e-2;
