@@ -62,7 +62,7 @@ void sweep_j_lines(const MomentumSystem& s, const Connectivity& con, CellView u,
     for (int colour = 0; colour < 2; ++colour) {
         fill_connected_ghosts(con, u);
         fill_connected_ghosts(con, v);
-        for_each_line(0, blocks, 1, [&](int b) {
+        for_each_line(0, blocks, 1, static_cast<long>(ni) * nj / 2, [&](int b) {
             const int i0 = b * block + ((b * block) % 2 == colour ? 0 : 1);
             const int i1 = std::min(ni, (b + 1) * block);
             for (int j = 0; j < nj; ++j)
@@ -111,7 +111,7 @@ void sweep_i_lines(const MomentumSystem& s, const Connectivity& con, CellView u,
     for (int colour = 0; colour < 2; ++colour) {
         fill_connected_ghosts(con, u);
         fill_connected_ghosts(con, v);
-        for_each_line(colour, nj, 2, [&](int j) {
+        for_each_line(colour, nj, 2, static_cast<long>(ni) * nj / 2, [&](int j) {
             solve_line(
                 s, ni, [&](int k) { return idx(ni, k, j); },
                 [&](std::size_t c) { return s.west[c]; }, [&](std::size_t c) { return s.east[c]; },
