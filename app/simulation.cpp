@@ -84,9 +84,9 @@ void Simulation::resume(const CheckpointData& checkpoint) {
 void Simulation::start_from(const FlowFields& initial) {
     m_solver->initialize(initial);
     if (is_steady(m_spec))
-        m_monitor.raise_references(free_stream_references(m_grid, m_spec.flow,
-                                                          solver_settings_for(m_spec),
-                                                          criteria_for(m_spec.run).reference_steps));
+        m_monitor.raise_references(
+            free_stream_references(m_grid, m_spec.flow, solver_settings_for(m_spec),
+                                   criteria_for(m_spec.run).reference_steps));
 }
 
 double Simulation::next_time_step() const {

@@ -16,8 +16,8 @@ inline constexpr const char* idle_spin_count = "1000000";
 
 /// Unless the user set OMP_WAIT_POLICY, sets it to PASSIVE (and GOMP_SPINCOUNT, unless set,
 /// to idle_spin_count when the one-minute load average is below the core count less one half)
-/// and re-executes the program with the same arguments. Returns (and the program carries on as it is) only when the variable was
-/// already set or the re-execution failed.
+/// and re-executes the program with the same arguments. Returns (and the program carries on as it
+/// is) only when the variable was already set or the re-execution failed.
 void restart_with_passive_waits(char** argv);
 
 }  // namespace veer

@@ -60,8 +60,8 @@ void respace_line(StructuredGrid& grid, int i, double first) {
     std::vector<Vec2> pts(static_cast<std::size_t>(nj + 1));
     double length = 0.0;
     for (int j = 0; j <= nj; ++j) pts[static_cast<std::size_t>(j)] = grid.node(i, j);
-    for (int j = 0; j < nj; ++j) length += norm(pts[static_cast<std::size_t>(j + 1)] -
-                                                pts[static_cast<std::size_t>(j)]);
+    for (int j = 0; j < nj; ++j)
+        length += norm(pts[static_cast<std::size_t>(j + 1)] - pts[static_cast<std::size_t>(j)]);
     // Bracket: the arc-length ratio is too small for chords (chords are shorter); twice its log
     // is ample for the slight turning of marched lines.
     double lo = 0.0, hi = 2.0 * std::log(geometric_ratio(first, length, nj));
