@@ -9,9 +9,10 @@
 namespace veer {
 
 /// Loops over fewer cells than this run on one thread: below it the fork and join of the
-/// threads cost more than the work (measured on 2 cores: NACA 0012 at 352 x 64, 2 threads were
-/// slower than 1 with every loop parallel).
-inline constexpr long serial_cell_limit = 16384;
+/// threads cost more than the work (the pressure solvers' loops too, pressure_loops.hpp;
+/// measured on 2 cores: NACA 0012 at 352 x 64, 2 threads were slower than 1 with every momentum
+/// loop parallel).
+inline constexpr int parallel_cell_threshold = 16384;
 
 /// Half-open index range [i0, i1) x [j0, j1).
 struct IndexRange {
@@ -25,7 +26,7 @@ struct IndexRange {
 template <class Kernel>
 void for_each_cell(IndexRange r, Kernel&& kernel) {
     const long cells = static_cast<long>(r.i1 - r.i0) * (r.j1 - r.j0);
-#pragma omp parallel for schedule(static) if (cells >= serial_cell_limit)
+#pragma omp parallel for schedule(static) if (cells >= parallel_cell_threshold)
     for (int j = r.j0; j < r.j1; ++j)
         for (int i = r.i0; i < r.i1; ++i) kernel(i, j);
 }
@@ -35,7 +36,7 @@ void for_each_cell(IndexRange r, Kernel&& kernel) {
 template <class Kernel>
 void for_each_line(int begin, int end, int step, long cells, Kernel&& kernel) {
     const int count = end > begin ? (end - begin + step - 1) / step : 0;
-#pragma omp parallel for schedule(static) if (cells >= serial_cell_limit)
+#pragma omp parallel for schedule(static) if (cells >= parallel_cell_threshold)
     for (int n = 0; n < count; ++n) kernel(begin + n * step);
 }
 
@@ -46,7 +47,7 @@ double sum_over_cells(IndexRange r, Kernel&& kernel) {
     if (rows <= 0) return 0.0;
     std::vector<double> partial(static_cast<std::size_t>(rows), 0.0);
     const long cells = static_cast<long>(r.i1 - r.i0) * rows;
-#pragma omp parallel for schedule(static) if (cells >= serial_cell_limit)
+#pragma omp parallel for schedule(static) if (cells >= parallel_cell_threshold)
     for (int j = r.j0; j < r.j1; ++j) {
         double s = 0.0;
         for (int i = r.i0; i < r.i1; ++i) s += kernel(i, j);
@@ -68,7 +69,7 @@ double min_over_cells(IndexRange r, double start, Kernel&& kernel) {
     if (rows <= 0) return start;
     std::vector<double> partial(static_cast<std::size_t>(rows), start);
     const long cells = static_cast<long>(r.i1 - r.i0) * rows;
-#pragma omp parallel for schedule(static) if (cells >= serial_cell_limit)
+#pragma omp parallel for schedule(static) if (cells >= parallel_cell_threshold)
     for (int j = r.j0; j < r.j1; ++j) {
         double m = start;
         for (int i = r.i0; i < r.i1; ++i) {

@@ -6,6 +6,8 @@
 #include <cstddef>
 #include <vector>
 
+#include "solver/loops.hpp"
+
 namespace veer {
 
 template <class Kernel>
@@ -13,9 +15,6 @@ void parallel_for(int n, int min_parallel, Kernel&& kernel) {
 #pragma omp parallel for schedule(static) if (n >= min_parallel)
     for (int k = 0; k < n; ++k) kernel(k);
 }
-
-/// Loops over cells: parallel above this many (about where two threads start to pay off).
-inline constexpr int parallel_cell_threshold = 16384;
 
 /// Sum of term(k) over [0, n): fixed blocks of 2048 summed in parallel, block sums added in block
 /// order, so the result is bitwise the same for any thread count. term may also update arrays at
