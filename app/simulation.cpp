@@ -89,9 +89,13 @@ void Simulation::start_from(const FlowFields& initial) {
                                    criteria_for(m_spec.run).reference_steps));
 }
 
-double Simulation::next_time_step() const {
+double Simulation::nominal_time_step() const {
     const double cfl = m_spec.run.cfl > 0 ? m_spec.run.cfl : default_unsteady_cfl(m_spec);
-    const double dt = m_solver->time_step_for_cfl(cfl);
+    return m_solver->time_step_for_cfl(cfl);
+}
+
+double Simulation::next_time_step() const {
+    const double dt = nominal_time_step();
     const double left = m_spec.run.end_time - m_solver->time();
     // Land on end_time exactly, without a sliver of a last step.
     return left < 1.5 * dt ? (left > dt ? 0.5 * left : left) : dt;
@@ -153,8 +157,8 @@ RunResult Simulation::run() {
             res.status = RunStatus::end_time;
             break;
         }
-        const StepReport r =
-            steady ? m_solver->advance_pseudo_time() : m_solver->advance(next_time_step());
+        const StepReport r = steady ? m_solver->advance_pseudo_time()
+                                    : m_solver->advance(next_time_step(), nominal_time_step());
         res.last = r;
         if (!r.finite) {
             res.status = RunStatus::diverged;

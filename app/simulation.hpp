@@ -70,6 +70,7 @@ private:
     void write_checkpoint_now();
     std::string divergence_diagnosis(const StepReport& r) const;
     double next_time_step() const;
+    double nominal_time_step() const;
 
     CaseSpec m_spec;
     StructuredGrid m_grid;

@@ -181,11 +181,12 @@ void FlowSolver::initialize(const FlowFields& initial) {
     s.reset_history();
 }
 
-StepReport FlowSolver::advance(double dt) {
+StepReport FlowSolver::advance(double dt, double nominal_dt) {
     VEER_VERIFY(m_impl->settings.mode == TimeMode::time_accurate,
                 "advance(dt) is the time-accurate step; steady runs call advance_pseudo_time()");
     VEER_VERIFY(dt > 0.0 && std::isfinite(dt), "a time step must be positive and finite");
-    return m_impl->step(dt, false);
+    VEER_VERIFY(nominal_dt >= 0.0 && std::isfinite(nominal_dt), "a nominal step must be finite");
+    return m_impl->step(dt, false, nominal_dt > 0.0 ? nominal_dt : dt);
 }
 
 StepReport FlowSolver::advance_pseudo_time() {

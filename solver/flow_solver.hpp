@@ -57,8 +57,11 @@ public:
     /// face fluxes interpolated from the new velocity.
     void initialize(const FlowFields& initial);
 
-    /// One time-accurate step of size dt (time_accurate mode).
-    StepReport advance(double dt);
+    /// One time-accurate step of size dt (time_accurate mode). `nominal_dt` is the step the run
+    /// would take if it were not landing on an end time (0: dt): it sets the pressure smoothing
+    /// of the predicted face fluxes (Rhie-Chow coefficient), so that a last step shortened to
+    /// land on an end time does not change the face fluxes of a flow that is not changing.
+    StepReport advance(double dt, double nominal_dt = 0.0);
     /// One pseudo-time step with local time steps (steady mode).
     StepReport advance_pseudo_time();
 

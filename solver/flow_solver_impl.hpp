@@ -58,7 +58,7 @@ struct FlowSolverCore {
     void refresh_local_steps();
     void apply_local_steps();
     void setup_uniform_pressure();
-    StepReport step(double dt, bool steady);
+    StepReport step(double dt, bool steady, double nominal_dt = 0.0);
     void update_vortex();
     void advance_turbulence(double dt, bool steady, StepReport& r);
 };
