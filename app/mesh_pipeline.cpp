@@ -2,7 +2,9 @@
 
 #include "io/coordinate_file.hpp"
 #include "mesh/cgrid.hpp"
+#include "mesh/circle.hpp"
 #include "mesh/naca.hpp"
+#include "mesh/ogrid.hpp"
 #include "mesh/section_builder.hpp"
 #include "mesh/surface_sampling.hpp"
 #include "mesh/wall_spacing.hpp"
@@ -10,6 +12,7 @@
 namespace veer {
 
 Section build_section(const CaseSpec& c) {
+    if (c.geometry.circle) return circle_section(c.mesh.around, c.geometry.name);
     if (!c.geometry.naca.empty()) {
         const TrailingEdge te =
             c.geometry.closed_trailing_edge ? TrailingEdge::closed : TrailingEdge::open;
@@ -23,8 +26,13 @@ MeshBuild build_mesh(const CaseSpec& c) {
     b.section = build_section(c);
     b.spec = c.mesh;
     if (c.y_plus) b.spec.first_cell = first_cell_for_y_plus(*c.y_plus, c.flow.reynolds);
-    b.surface = sample_surface(b.section, b.spec.around);
-    b.grid = generate_cgrid(b.surface, b.spec);
+    if (c.geometry.circle) {
+        b.surface = b.section.points;
+        b.grid = generate_ogrid(b.surface, b.spec);
+    } else {
+        b.surface = sample_surface(b.section, b.spec.around);
+        b.grid = generate_cgrid(b.surface, b.spec);
+    }
     b.quality = assess_quality(b.grid, b.spec.max_growth);
     return b;
 }

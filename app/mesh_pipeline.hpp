@@ -1,5 +1,5 @@
 #pragma once
-/// Geometry -> surface nodes -> C-grid, as a case file asks for it.
+/// Geometry -> surface nodes -> C-grid (O-grid for the circle), as a case file asks for it.
 #include <vector>
 
 #include "io/case_spec.hpp"
@@ -17,7 +17,8 @@ struct MeshBuild {
     GridQuality quality;
 };
 
-/// The section of a case: a NACA designation or a coordinate file, validated and normalised.
+/// The section of a case: a NACA designation, a coordinate file or the circle, validated and
+/// normalised.
 Section build_section(const CaseSpec& c);
 
 /// The whole mesh of a case. Throws InputError when the geometry or the grid cannot be made.

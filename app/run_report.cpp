@@ -8,9 +8,12 @@
 #include <nlohmann/json.hpp>
 #include <sstream>
 
+#include "app/report_csv.hpp"
 #include "app/run_tables.hpp"
 #include "io/json_writer.hpp"
 #include "io/vtk_grid_writer.hpp"
+#include "mesh/circle.hpp"
+#include "postprocess/recirculation.hpp"
 #include "postprocess/time_average.hpp"
 
 namespace veer {
@@ -54,41 +57,62 @@ nlohmann::json bubbles_json(const SurfaceSeparation& s) {
     return b;
 }
 
-/// Averages of Cl, Cd, Cm over the last whole cycles of the lift in history.csv (unsteady).
-nlohmann::json cycle_averages(const std::filesystem::path& history) {
-    std::ifstream in(history);
-    std::string line;
-    std::getline(in, line);
-    std::vector<double> t, cl, cd, cm;
-    while (std::getline(in, line)) {
-        std::vector<double> v;
-        std::stringstream s(line);
-        for (std::string cell; std::getline(s, cell, ',');) v.push_back(std::stod(cell));
-        if (v.size() < 8) continue;
-        t.push_back(v[1]);
-        cl.push_back(v[5]);
-        cd.push_back(v[6]);
-        cm.push_back(v[7]);
-    }
-    const auto window = last_whole_cycles(t, cl, 5);
-    if (!window) return nullptr;
-    auto amplitude = [&](const std::vector<double>& x) {
-        double lo = 1e300, hi = -1e300;
-        for (std::size_t k = 0; k < t.size(); ++k)
-            if (t[k] >= window->begin && t[k] <= window->end) {
-                lo = std::min(lo, x[k]);
-                hi = std::max(hi, x[k]);
-            }
-        return 0.5 * (hi - lo);
+/// The time_average object: statistics over the last whole cycles, each figure beside its
+/// cycle-to-cycle spread, and the control-volume route's means over the same cycles.
+nlohmann::json time_average_json(const UnsteadyFigures& u, const CaseSpec& spec) {
+    if (!u.shedding) return nullptr;
+    const SheddingStatistics& s = *u.shedding;
+    nlohmann::json t = {
+        {"cycles", s.cycles},
+        {"window", {s.window.begin, s.window.end}},
+        {"periodic", s.periodic},
+        {"not_periodic", s.periodic ? nlohmann::json(nullptr) : nlohmann::json(s.not_periodic)},
+        {"period", s.window.period()},
+        {"strouhal", s.strouhal.value},
+        {"strouhal_spread", s.strouhal.spread},
+        {"mean", {{"cl", s.cl_mean.value}, {"cd", s.cd_mean.value}, {"cm", s.cm_mean.value}}},
+        {"mean_spread",
+         {{"cl", s.cl_mean.spread}, {"cd", s.cd_mean.spread}, {"cm", s.cm_mean.spread}}},
+        {"cl_rms", s.cl_rms.value},
+        {"cl_rms_spread", s.cl_rms.spread},
+        {"cl_peak", s.cl_peak.value},
+        {"cl_peak_spread", s.cl_peak.spread},
+        {"cl_amplitude", s.cl_amplitude.value},
+        {"cd_amplitude", s.cd_amplitude.value},
     };
-    return {{"cycles", window->cycles},
-            {"period", window->period()},
-            {"strouhal", 1.0 / window->period()},
-            {"cl_mean", window_average(t, cl, *window)},
-            {"cd_mean", window_average(t, cd, *window)},
-            {"cm_mean", window_average(t, cm, *window)},
-            {"cl_amplitude", amplitude(cl)},
-            {"cd_amplitude", amplitude(cd)}};
+    if (u.routes) {
+        nlohmann::json cl = nlohmann::json::object(), cd = nlohmann::json::object();
+        double worst = 0.0;
+        for (std::size_t k = 0; k < u.routes->size(); ++k) {
+            const RouteMean& r = (*u.routes)[k];
+            const std::string key = fmt::format("{:g}", spec.post.contours[k]);
+            cl[key] = r.cl;
+            cd[key] = r.cd;
+            worst = std::max(worst, std::abs(r.cl - s.cl_mean.value));
+        }
+        t["momentum"] = {{"cl", cl}, {"cd", cd}};
+        t["max_lift_disagreement"] = worst;
+    }
+    return t;
+}
+
+/// Separation angles, recirculation length and base pressure of the circle.
+CircleFigures circle_figures(const Simulation& sim, const FlowFields& f, const RunAnalysis& a) {
+    CircleFigures c;
+    auto angle = [](const std::vector<SurfaceLocation>& v) {
+        return v.empty() ? std::nullopt
+                         : std::optional<double>(angle_from_rear_deg({v.front().x, v.front().y}));
+    };
+    c.separation_angle_upper = angle(a.separation.upper.separations);
+    c.separation_angle_lower = angle(a.separation.lower.separations);
+    if (sim.spec().run.mode == "steady")
+        c.recirculation_length = recirculation_length(sim.grid(), sim.metrics(), f);
+    c.base_cp = 0.5 * (a.kutta.cp_upper + a.kutta.cp_lower);
+    return c;
+}
+
+nlohmann::json optional_json(const std::optional<double>& v) {
+    return v ? nlohmann::json(*v) : nlohmann::json(nullptr);
 }
 
 }  // namespace
@@ -97,7 +121,8 @@ RunAnalysis analyse_run(const Simulation& sim) {
     RunAnalysis a;
     const CaseSpec& spec = sim.spec();
     const FlowFields f = sim.solver().fields();
-    a.forces = integrate_surface_forces(sim.grid(), sim.metrics(), f, spec.flow);
+    a.forces = integrate_surface_forces(sim.grid(), sim.metrics(), f, spec.flow,
+                                        surface_force_options(spec));
     a.surface = surface_distribution(sim.grid(), sim.metrics(), f, spec.flow);
     a.separation = find_separation(a.surface);
     a.kutta = kutta_check(a.surface);
@@ -107,10 +132,22 @@ RunAnalysis analyse_run(const Simulation& sim) {
     WakeProfileOptions wake;
     wake.stations = spec.post.wake_stations;
     a.wake = wake_profiles(sim.grid(), sim.metrics(), f, spec.flow, wake);
+    if (spec.geometry.circle) a.circle = circle_figures(sim, f, a);
     return a;
 }
 
-nlohmann::json summary_json(const Simulation& sim, const RunResult& r, const RunAnalysis& a) {
+UnsteadyFigures unsteady_figures(const Simulation& sim, const ControlVolumeHistory* routes) {
+    UnsteadyFigures u;
+    const CsvTable h = CsvTable::read(sim.checkpoint_path().parent_path() / "history.csv");
+    u.shedding = shedding_statistics(h.numbers("time"), h.numbers("cl"), h.numbers("cd"),
+                                     h.numbers("cm"), summary_cycles);
+    if (u.shedding && routes)
+        u.routes = routes->means(u.shedding->window, sim.spec().flow.alpha_deg);
+    return u;
+}
+
+nlohmann::json summary_json(const Simulation& sim, const RunResult& r, const RunAnalysis& a,
+                            const UnsteadyFigures* unsteady) {
     const CaseSpec& spec = sim.spec();
     const SurfaceForces& f = a.forces;
     nlohmann::json cl_momentum = nlohmann::json::object(), cd_momentum = nlohmann::json::object(),
@@ -152,9 +189,6 @@ nlohmann::json summary_json(const Simulation& sim, const RunResult& r, const Run
          location_or_null(reattachment_after_first_separation(a.separation.lower))},
         {"bubbles_upper", bubbles_json(a.separation.upper)},
         {"bubbles_lower", bubbles_json(a.separation.lower)},
-        {"trailing_edge_cp_upper", a.kutta.cp_upper},
-        {"trailing_edge_cp_lower", a.kutta.cp_lower},
-        {"trailing_edge_cp_difference", a.kutta.difference},
         {"converged", settled},
         {"status", status_word(r.status)},
         {"iterations", r.steps},
@@ -172,12 +206,25 @@ nlohmann::json summary_json(const Simulation& sim, const RunResult& r, const Run
                         {"mean_flow_angle_deg", w.mean_flow_angle_deg},
                         {"downwash_deg", w.downwash_deg}});
     s["wake"] = wake;
+    s["reference_length"] = a.circle ? "diameter" : "chord";
+    if (a.circle) {
+        s["separation_angle_upper_deg"] = optional_json(a.circle->separation_angle_upper);
+        s["separation_angle_lower_deg"] = optional_json(a.circle->separation_angle_lower);
+        s["recirculation_length"] = optional_json(a.circle->recirculation_length);
+        s["base_cp"] = a.circle->base_cp;
+    } else {
+        s["trailing_edge_cp_upper"] = a.kutta.cp_upper;
+        s["trailing_edge_cp_lower"] = a.kutta.cp_lower;
+        s["trailing_edge_cp_difference"] = a.kutta.difference;
+    }
     if (spec.run.mode == "unsteady")
-        s["time_average"] = cycle_averages(sim.checkpoint_path().parent_path() / "history.csv");
+        s["time_average"] = unsteady ? time_average_json(*unsteady, spec)
+                                     : time_average_json(unsteady_figures(sim, nullptr), spec);
     return s;
 }
 
-void write_run_report(const Simulation& sim, const RunResult& r, ClosingTable table) {
+void write_run_report(const Simulation& sim, const RunResult& r, ClosingTable table,
+                      const ControlVolumeHistory* routes) {
     const std::filesystem::path dir = sim.checkpoint_path().parent_path();
     if (!sim.grid().c_layout()) {  // verification blocks: no section, no forces
         write_json_file(dir / "summary.json", {{"converged", r.status == RunStatus::converged},
@@ -189,8 +236,10 @@ void write_run_report(const Simulation& sim, const RunResult& r, ClosingTable ta
     write_surface_csv(dir / "surface.csv", a.surface);
     write_wake_csv(dir / "wake.csv", a.wake);
     write_surface_vtp_file(dir / "surface.vtp", a.surface);
-    write_json_file(dir / "summary.json", summary_json(sim, r, a));
-    if (table == ClosingTable::print) print_closing_table(sim.spec(), a);
+    const bool unsteady = sim.spec().run.mode == "unsteady";
+    const UnsteadyFigures u = unsteady ? unsteady_figures(sim, routes) : UnsteadyFigures{};
+    write_json_file(dir / "summary.json", summary_json(sim, r, a, unsteady ? &u : nullptr));
+    if (table == ClosingTable::print) print_closing_table(sim.spec(), a, unsteady ? &u : nullptr);
 }
 
 }  // namespace veer

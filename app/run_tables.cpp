@@ -57,10 +57,14 @@ void write_surface_vtp_file(const std::filesystem::path& path, const SurfaceDist
                       {0, d.lower.size()});
 }
 
-void print_closing_table(const CaseSpec& spec, const RunAnalysis& a) {
+namespace {
+
+/// The reference length's name in the table's words.
+const char* lengths(const CaseSpec& spec) { return spec.geometry.circle ? "diameters" : "chords"; }
+
+void print_routes(const CaseSpec& spec, const RunAnalysis& a, bool unsteady) {
     const double cl = a.forces.cl.total;
-    fmt::print("\n  lift two ways ({} at alpha {:g} deg, Re {:g})\n", spec.geometry.name,
-               spec.flow.alpha_deg, spec.flow.reynolds);
+    const char* unit = lengths(spec);
     fmt::print("  {:<34} {:>10} {:>10} {:>10}\n", "route", "Cl", "Cd", "dCl");
     fmt::print("  {:<34} {:>10.5f} {:>10.5f} {:>10}\n", "surface (pressure + friction)", cl,
                a.forces.cd.total, "-");
@@ -70,19 +74,29 @@ void print_closing_table(const CaseSpec& spec, const RunAnalysis& a) {
         const double diff = m.cl.total - cl;
         worst = std::max(worst, std::abs(diff));
         fmt::print("  {:<34} {:>10.5f} {:>10.5f} {:>+10.5f}\n",
-                   fmt::format("control volume at {:.2f} chords", m.contour.distance), m.cl.total,
+                   fmt::format("control volume at {:.2f} {}", m.contour.distance, unit), m.cl.total,
                    m.cd.total, diff);
     }
     for (const ContourCirculation& c : a.circulation)
         fmt::print("  {:<34} {:>10.5f} {:>10} {:>+10.5f}\n",
-                   fmt::format("circulation at {:.2f} chords", c.contour.distance), c.cl, "",
+                   fmt::format("circulation at {:.2f} {}", c.contour.distance, unit), c.cl, "",
                    c.cl - cl);
+    if (unsteady) {
+        fmt::print(
+            "  (this instant: the control-volume rows leave out the rate of change of the "
+            "momentum inside, so they differ from the surface in unsteady flow; compare the "
+            "time means below)\n");
+        return;
+    }
     // A percentage of a lift near zero (a symmetric section at zero incidence) says nothing.
     if (std::abs(cl) >= near_zero_lift)
         fmt::print("  largest surface/control-volume disagreement: {:.5f} ({:.2f}% of Cl)\n", worst,
                    100 * worst / std::abs(cl));
     else
         fmt::print("  largest surface/control-volume disagreement: {:.5f} (Cl near zero)\n", worst);
+}
+
+void print_section_lines(const RunAnalysis& a) {
     fmt::print(
         "  Cm (quarter chord) {:.5f}; Kutta check: Cp upper {:.4f}, lower {:.4f} at the "
         "trailing edge\n",
@@ -102,6 +116,73 @@ void print_closing_table(const CaseSpec& spec, const RunAnalysis& a) {
             "  wake {:.2f} chords behind the TE: downwash {:+.3f} deg, downward momentum "
             "flux {:.5f}\n",
             w.station, w.downwash_deg, w.downward_momentum_flux);
+}
+
+void print_circle_lines(const RunAnalysis& a) {
+    const CircleFigures& c = *a.circle;
+    auto angle = [](const std::optional<double>& v) {
+        return v ? fmt::format("{:.2f} deg from the rear point", *v) : std::string("none");
+    };
+    fmt::print("  Cm (about the centre) {:.5f}; base Cp (rear point) {:.4f}\n", a.forces.cm.total,
+               c.base_cp);
+    fmt::print("  separation: upper half {}, lower half {}\n", angle(c.separation_angle_upper),
+               angle(c.separation_angle_lower));
+    if (c.recirculation_length)
+        fmt::print("  recirculation length {:.4f} diameters behind the rear point\n",
+                   *c.recirculation_length);
+    for (const WakeProfile& w : a.wake)
+        fmt::print("  wake {:.2f} diameters behind the rear point: mean flow angle {:+.3f} deg\n",
+                   w.station, w.mean_flow_angle_deg);
+}
+
+void print_time_means(const CaseSpec& spec, const UnsteadyFigures& u) {
+    if (!u.shedding) {
+        fmt::print("\n  time means: no whole cycle of the lift in the record\n");
+        return;
+    }
+    const SheddingStatistics& s = *u.shedding;
+    fmt::print(
+        "\n  time means over the last {} whole cycles of the lift, t = {:.2f} to {:.2f} "
+        "(figure, largest cycle-to-cycle deviation)\n",
+        s.cycles, s.window.begin, s.window.end);
+    fmt::print("  Strouhal number {:.5f} ({:.1e}); mean Cd {:.5f} ({:.1e}); mean Cl {:+.5f}\n",
+               s.strouhal.value, s.strouhal.spread, s.cd_mean.value, s.cd_mean.spread,
+               s.cl_mean.value);
+    fmt::print("  Cl rms {:.5f} ({:.1e}), peak {:.5f} ({:.1e}); Cd amplitude {:.5f}\n",
+               s.cl_rms.value, s.cl_rms.spread, s.cl_peak.value, s.cl_peak.spread,
+               s.cd_amplitude.value);
+    if (!s.periodic) fmt::print("  not yet periodic: {}\n", s.not_periodic);
+    if (!u.routes) return;
+    for (const RouteMean& r : *u.routes)
+        fmt::print(
+            "  control volume at {:.2f} {}: mean Cl {:+.5f} (surface {:+.5f}), mean Cd "
+            "{:.5f} ({:+.2f}% of the surface's)\n",
+            r.contour.distance, lengths(spec), r.cl, r.cl - s.cl_mean.value, r.cd,
+            100 * (r.cd - s.cd_mean.value) / s.cd_mean.value);
+}
+
+}  // namespace
+
+void print_closing_table(const CaseSpec& spec, const RunAnalysis& a, const UnsteadyFigures* u) {
+    if (spec.geometry.circle)
+        fmt::print(
+            "\n  forces two ways ({}, Re {:g} on the diameter; coefficients per unit span "
+            "on the diameter)\n",
+            spec.geometry.name, spec.flow.reynolds);
+    else
+        fmt::print("\n  lift two ways ({} at alpha {:g} deg, Re {:g})\n", spec.geometry.name,
+                   spec.flow.alpha_deg, spec.flow.reynolds);
+    print_routes(spec, a, u != nullptr);
+    if (a.circle)
+        print_circle_lines(a);
+    else
+        print_section_lines(a);
+    if (u) print_time_means(spec, *u);
+    fmt::print(
+        "  cautions: 2D and incompressible; the {} model has its limits; check grid and time-step "
+        "convergence before relying on a figure; not a substitute for testing and licensed "
+        "engineering review of anything that flies\n",
+        spec.model);
 }
 
 }  // namespace veer

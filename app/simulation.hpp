@@ -83,7 +83,12 @@ private:
     long m_last_checkpoint_step = -1;
 };
 
-/// Solver settings for a case (mode, pressure solver, CFL).
+/// Solver settings for a case (mode, pressure solver, CFL; for the circle: no far-field vortex,
+/// the start spin).
 SolverSettings solver_settings_for(const CaseSpec& spec);
+
+/// How the surface forces of a case are integrated: moments about the quarter chord of a
+/// section, about the centre of the circle.
+SurfaceForceOptions surface_force_options(const CaseSpec& spec);
 
 }  // namespace veer

@@ -45,6 +45,13 @@ public:
         return v;
     }
 
+    std::optional<bool> flag(const std::string& key, const std::string& allowed) {
+        const toml::node* n = find(key);
+        if (!n) return std::nullopt;
+        if (!n->is_boolean()) fail(*n, key, describe(*n), allowed);
+        return n->as_boolean()->get();
+    }
+
     std::optional<std::string> text(const std::string& key, const std::set<std::string>& choices,
                                     const std::string& allowed) {
         const toml::node* n = find(key);
@@ -138,12 +145,24 @@ void read_geometry(const toml::table* t, const std::string& source, const fs_pat
     const auto naca = r.text("naca", {}, "four or five digits, e.g. \"0012\" or \"23012\"");
     const auto file = r.text("coordinates", {}, "the path of a two-column x y file");
     const auto te = r.text("trailing_edge", {"open", "closed"}, "\"open\" or \"closed\"");
+    const auto circle = r.flag("circle", "true (a circular cylinder of diameter 1)");
     const auto name = r.text("name", {}, "a label");
-    r.reject_unknown("naca, coordinates, trailing_edge, name");
-    if (naca.has_value() == file.has_value())
+    r.reject_unknown("naca, coordinates, circle, trailing_edge, name");
+    if (circle && !*circle)
+        r.fail(*t->get("circle"), "circle", "false",
+               "true, or leave the key out and give naca or coordinates");
+    if (naca.has_value() + file.has_value() + circle.has_value() != 1)
         throw InputError(source +
-                         ": [geometry] needs exactly one of naca = \"0012\" or "
-                         "coordinates = \"file.dat\"");
+                         ": [geometry] needs exactly one of naca = \"0012\", "
+                         "coordinates = \"file.dat\" or circle = true");
+    if (circle) {
+        if (te)
+            r.fail(*t->get("trailing_edge"), "trailing_edge", "\"" + *te + "\"",
+                   "no trailing_edge with circle = true (a circle has none)");
+        c.geometry.circle = true;
+        c.geometry.name = name ? *name : "circle";
+        return;
+    }
     if (naca) {
         const bool digits = std::all_of(naca->begin(), naca->end(), [](char ch) {
             return std::isdigit(static_cast<unsigned char>(ch)) != 0;
@@ -180,6 +199,9 @@ void read_mesh(const toml::table* t, const std::string& source, CaseSpec& c) {
         r.integer("normal", 4, 4096, "an integer from 4 to 4096").value_or(m.normal));
     const auto wake = r.integer("wake", 2, 4096, "an integer from 2 to 4096");
     m.wake = wake ? static_cast<int>(*wake) : std::max(2, 3 * m.around / 16);
+    if (c.geometry.circle && r.has("wake"))
+        r.fail(*t->get("wake"), "wake", std::to_string(*wake),
+               "no wake key with circle = true (its O-grid has no wake cut)");
     m.far_field = r.number("far_field", 2.0, 1000.0, "a distance from 2 to 1000 chords")
                       .value_or(m.far_field);
     const auto first = r.number("first_cell", 1e-9, 0.1, "a height from 1e-9 to 0.1 chords");
@@ -199,6 +221,9 @@ void read_flow(const toml::table* t, const std::string& source, CaseSpec& c) {
     c.flow.reynolds = *re;
     c.flow.alpha_deg =
         r.number("alpha", -90.0, 90.0, "an angle of attack from -90 to 90 degrees").value_or(0.0);
+    if (c.geometry.circle && c.flow.alpha_deg != 0.0)
+        r.fail(*t->get("alpha"), "alpha", fmt::format("{}", c.flow.alpha_deg),
+               "0 with circle = true (a circle has no angle of attack: the flow runs along +x)");
     c.model =
         r.text("model", {"laminar", "spalart-allmaras"}, "\"laminar\" or \"spalart-allmaras\"")
             .value_or("laminar");
@@ -228,9 +253,17 @@ void read_run(const toml::table* t, const std::string& source, CaseSpec& c) {
     run.pressure_solver = r.text("pressure_solver", {"multigrid", "eigen-cg", "eigen-bicgstab"},
                                  "\"multigrid\", \"eigen-cg\" or \"eigen-bicgstab\"")
                               .value_or(run.pressure_solver);
+    const auto spin = r.number("start_spin", 0.0, 2.0, "a surface speed from 0 to 2");
     r.reject_unknown(
         "mode, steps, end_time, cfl, residual_drop, force_tolerance, output_every, "
-        "checkpoint_every, pressure_solver");
+        "checkpoint_every, pressure_solver, start_spin");
+    if (spin && *spin > 0.0 && !c.geometry.circle)
+        r.fail(*t->get("start_spin"), "start_spin", fmt::format("{}", *spin),
+               "0 unless [geometry] circle = true (only a circle can spin in place)");
+    if (spin && *spin > 0.0 && run.mode != "unsteady")
+        r.fail(*t->get("start_spin"), "start_spin", fmt::format("{}", *spin),
+               "0 unless mode = \"unsteady\" (the spin starts a time-accurate run)");
+    run.start_spin = spin.value_or(0.0);
 }
 
 void read_post(const toml::table* t, const std::string& source, CaseSpec& c) {

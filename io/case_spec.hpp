@@ -10,12 +10,15 @@
 
 namespace veer {
 
-/// [geometry]: a NACA designation or a coordinate file (exactly one of them).
+/// [geometry]: a NACA designation, a coordinate file or the circle (exactly one of them).
 struct GeometrySpec {
     std::string naca;                   ///< e.g. "0012", "23012"; empty when a file is used
     std::filesystem::path coordinates;  ///< resolved against the case file's folder
     bool closed_trailing_edge = false;  ///< NACA only: the closed-TE thickness variant
-    std::string name;                   ///< label for reports
+    /// A circular cylinder of diameter 1, meshed as an O-grid; the diameter is the reference
+    /// length in place of the chord (Reynolds number, coefficients, distances).
+    bool circle = false;
+    std::string name;  ///< label for reports
 };
 
 /// [run]: how the solution is marched and written.
@@ -29,6 +32,10 @@ struct RunSpec {
     long output_every = 0;          ///< field frame interval in steps; 0: first and last only
     long checkpoint_every = 500;    ///< checkpoint interval in steps
     std::string pressure_solver = "multigrid";  ///< "multigrid", "eigen-cg", "eigen-bicgstab"
+    /// Circle, unsteady: surface speed (free-stream units) of a brief counter-clockwise spin of
+    /// the body at the start, start_spin sin(pi t / 2) for 0 < t < 2, which breaks the symmetry
+    /// of the start so that shedding begins within a few cycles (0: none).
+    double start_spin = 0.0;
 };
 
 /// [post]: where the control-volume contours and wake stations lie.

@@ -50,14 +50,22 @@ void measure_cells(const StructuredGrid& g, GridQuality& q) {
         }
 }
 
+/// The central chord of wall node i; on an O-grid it wraps across the seam (nodes 0 and ni are
+/// one node).
+Vec2 wall_chord(const StructuredGrid& g, const CGridLayout& c, int i) {
+    const int ni = g.ni();
+    if (c.closed() && (i == 0 || i == ni)) return g.node(1, 0) - g.node(ni - 1, 0);
+    return g.node(i + 1, 0) - g.node(i - 1, 0);
+}
+
 void measure_wall(const StructuredGrid& g, const CGridLayout& c, GridQuality& q) {
     const int te_lower = c.wake, te_upper = c.wake + c.around;
     std::vector<double> heights;
     for (int i = te_lower; i <= te_upper; ++i) {
         const Vec2 line = g.node(i, 1) - g.node(i, 0);
         heights.push_back(norm(line));
-        const double angle = non_orthogonality(g.node(i + 1, 0) - g.node(i - 1, 0), line);
-        if (i == te_lower || i == te_upper)
+        const double angle = non_orthogonality(wall_chord(g, c, i), line);
+        if (!c.closed() && (i == te_lower || i == te_upper))
             q.trailing_edge_non_orthogonality = std::max(q.trailing_edge_non_orthogonality, angle);
         else
             q.wall_non_orthogonality = std::max(q.wall_non_orthogonality, angle);

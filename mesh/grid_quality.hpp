@@ -1,5 +1,5 @@
 #pragma once
-/// Measures of a C-grid that decide whether a flow solver can use it.
+/// Measures of a C- or O-grid that decide whether a flow solver can use it.
 #include <string>
 #include <vector>
 
@@ -18,7 +18,8 @@ struct GridQuality {
     /// chord node(i+1, 0) - node(i-1, 0), over wall nodes other than the trailing-edge nodes.
     double wall_non_orthogonality = 0.0;
     /// The same angle at the two trailing-edge nodes (a corner: measured against the chord from
-    /// the first wake node to the first surface node).
+    /// the first wake node to the first surface node); 0 on an O-grid, whose rear point is an
+    /// ordinary wall node counted above.
     double trailing_edge_non_orthogonality = 0.0;
     double max_aspect_ratio = 0.0;  ///< longest over shortest mean edge of a cell, worst cell
     double max_growth_ratio = 0.0;  ///< largest ratio of consecutive steps along a j line
@@ -29,9 +30,9 @@ struct GridQuality {
     std::vector<std::string> warnings;  ///< one sentence each, naming what to change
 };
 
-/// Quality of `grid` (it needs c_layout, i.e. a C-grid). A warning is recorded when the growth
-/// ratio exceeds `max_growth` (with the number of normal cells that would keep the cap), or when a
-/// cell area is not positive.
+/// Quality of `grid` (it needs c_layout: a C-grid or an O-grid). A warning is recorded when the
+/// growth ratio exceeds `max_growth` (with the number of normal cells that would keep the cap), or
+/// when a cell area is not positive.
 GridQuality assess_quality(const StructuredGrid& grid, double max_growth = CGridSpec{}.max_growth);
 
 }  // namespace veer

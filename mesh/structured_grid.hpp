@@ -34,10 +34,13 @@ struct BoundarySegment {
 };
 
 /// Where the C-grid's pieces lie along j = 0 (cell counts). ni = 2 * wake + around; the wake cut
-/// pairs cell i with ni - 1 - i for i < wake and i >= wake + around.
+/// pairs cell i with ni - 1 - i for i < wake and i >= wake + around. wake = 0 is an O-grid
+/// (mesh/ogrid.hpp): the section's block closed on itself, periodic in i, with no wake cut.
 struct CGridLayout {
     int wake = 0;
     int around = 0;
+    /// An O-grid: the wall runs all the way round and the i sides are joined.
+    bool closed() const { return wake == 0; }
 };
 
 /// Node coordinates and boundary description of a single structured block.
@@ -61,7 +64,7 @@ public:
     std::vector<BoundarySegment>& segments() { return m_segments; }
     const std::vector<BoundarySegment>& segments() const { return m_segments; }
 
-    /// Set for C-grids around a section; empty for the verification blocks.
+    /// Set for C- and O-grids around a section; empty for the verification blocks.
     std::optional<CGridLayout>& c_layout() { return m_c_layout; }
     const std::optional<CGridLayout>& c_layout() const { return m_c_layout; }
 

@@ -20,8 +20,11 @@ Vec2 least_squares_gradient(const StructuredGrid& grid, const GridMetrics& m,
     const int ni = grid.ni(), nj = grid.nj();
     std::array<std::size_t, 4> nb{};
     int count = 0;
-    if (i > 0) nb[static_cast<std::size_t>(count++)] = m.cell(i - 1, j);
-    if (i < ni - 1) nb[static_cast<std::size_t>(count++)] = m.cell(i + 1, j);
+    // An O-grid is closed across its seam: cell 0 and cell ni - 1 are neighbours.
+    const bool closed = grid.c_layout() && grid.c_layout()->closed();
+    if (i > 0 || closed) nb[static_cast<std::size_t>(count++)] = m.cell(i > 0 ? i - 1 : ni - 1, j);
+    if (i < ni - 1 || closed)
+        nb[static_cast<std::size_t>(count++)] = m.cell(i < ni - 1 ? i + 1 : 0, j);
     if (j < nj - 1) nb[static_cast<std::size_t>(count++)] = m.cell(i, j + 1);
     if (j > 0)
         nb[static_cast<std::size_t>(count++)] = m.cell(i, j - 1);

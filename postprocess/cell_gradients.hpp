@@ -1,7 +1,8 @@
 #pragma once
 /// Cell-centred gradients for post-processing (viscous stresses on contours): weighted least
 /// squares over the face neighbours of a cell, with the C-grid wake cut as connectivity (cell
-/// (i, 0) neighbours (ni-1-i, 0) across j = 0 in the wake). Exact for linear fields on any grid;
+/// (i, 0) neighbours (ni-1-i, 0) across j = 0 in the wake) and the O-grid seam too (cell 0
+/// neighbours cell ni - 1). Exact for linear fields on any grid;
 /// boundary sides simply have one neighbour fewer. Weights 1/|dx|^2 (common practice).
 #include <vector>
 

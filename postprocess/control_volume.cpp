@@ -27,6 +27,19 @@ Vec2 momentum_rate(const GridMetrics& m, const StructuredGrid& grid, const FlowF
     return (1.0 / options.dt) * rate;
 }
 
+}  // namespace
+
+Vec2 contour_momentum(const GridMetrics& metrics, const StructuredGrid& grid,
+                      const FlowFields& fields, const GridContour& contour) {
+    VEER_VERIFY(fields.u.size() == metrics.volume.size(), "fields do not match the grid");
+    Vec2 sum;
+    for (std::size_t c : contour_cells(metrics, grid, contour))
+        sum = sum + metrics.volume[c] * Vec2{fields.u[c], fields.v[c]};
+    return sum;
+}
+
+namespace {
+
 MomentumParts project(Vec2 pressure, Vec2 flux, Vec2 viscous, Vec2 unsteady, Vec2 direction) {
     const double s = 1.0 / free_stream_dynamic_pressure;  // chord 1
     MomentumParts p;

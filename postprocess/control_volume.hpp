@@ -46,6 +46,12 @@ ContourForces contour_forces(const StructuredGrid& grid, const GridMetrics& metr
                              const FlowFields& fields, const FlowConditions& conditions,
                              const GridContour& contour, const ControlVolumeOptions& options = {});
 
+/// The momentum inside a contour, sum of u V over its cells (chord frame, rho = 1): the
+/// rate-of-change term is its time derivative, so its time mean over a window is the change of
+/// this sum over the window divided by the window's length.
+Vec2 contour_momentum(const GridMetrics& metrics, const StructuredGrid& grid,
+                      const FlowFields& fields, const GridContour& contour);
+
 /// Momentum balance on each of several contours.
 std::vector<ContourForces> contour_forces(const StructuredGrid& grid, const GridMetrics& metrics,
                                           const FlowFields& fields,

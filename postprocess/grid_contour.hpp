@@ -12,6 +12,9 @@
 ///
 /// The cells inside are j < line_j, cut_i <= i < ni - cut_i. Faces are listed along the contour
 /// clockwise (the way i runs on the wall), each with its area vector pointing out of the contour.
+///
+/// On an O-grid (CGridLayout::closed) a contour is the whole j-face line fj = line_j, closed on
+/// itself across the seam; cut_i = 0 and the cells inside are all cells j < line_j.
 #include <cstddef>
 #include <vector>
 
@@ -24,9 +27,9 @@ namespace veer {
 /// Where a contour lies, in grid indices and in chords.
 struct GridContour {
     int line_j = 1;              ///< j-face line of the part around the section, 1 .. nj-1
-    int cut_i = 1;               ///< i-face line of the lower wake crossing, 1 .. wake
+    int cut_i = 1;               ///< i-face line of the lower wake crossing, 1 .. wake (O: 0)
     double distance = 0.0;       ///< least distance of the j line's nodes from their wall nodes
-    double wake_crossing = 0.0;  ///< distance along the wake cut from the trailing edge
+    double wake_crossing = 0.0;  ///< distance along the wake cut (O: the seam) from the wall
     double requested = 0.0;      ///< the distance asked for (0 when chosen by indices)
 };
 

@@ -64,14 +64,32 @@ std::vector<double> upward_crossings(const std::vector<double>& time,
     return out;
 }
 
-std::optional<CycleWindow> last_whole_cycles(const std::vector<double>& time,
-                                             const std::vector<double>& signal, int max_cycles) {
-    VEER_VERIFY(max_cycles >= 1, "ask for at least one cycle");
+double window_change_rate(const std::vector<double>& t, const std::vector<double>& q,
+                          const CycleWindow& w) {
+    VEER_VERIFY(t.size() == q.size() && t.size() >= 2, "a change rate needs two samples");
+    VEER_VERIFY(w.end > w.begin && w.begin >= t.front() && w.end <= t.back(),
+                "the window must lie within the samples");
+    auto at = [&](double x) {
+        const auto hi = std::upper_bound(t.begin(), t.end(), x);
+        const std::size_t k = std::min(static_cast<std::size_t>(hi - t.begin()), t.size() - 1) - 1;
+        return value_at(t, q, k, x);
+    };
+    return (at(w.end) - at(w.begin)) / (w.end - w.begin);
+}
+
+std::vector<double> cycle_crossings(const std::vector<double>& time,
+                                    const std::vector<double>& signal) {
     std::vector<double> sum, sum_sq;
     prefix_sums(signal, sum, sum_sq);
     const LevelBand lb = level_band(sum, sum_sq);
-    if (signal.size() < 3 || lb.steady()) return std::nullopt;
-    const std::vector<double> c = upward_crossings(time, signal, lb.level, lb.band);
+    if (signal.size() < 3 || lb.steady()) return {};
+    return upward_crossings(time, signal, lb.level, lb.band);
+}
+
+std::optional<CycleWindow> last_whole_cycles(const std::vector<double>& time,
+                                             const std::vector<double>& signal, int max_cycles) {
+    VEER_VERIFY(max_cycles >= 1, "ask for at least one cycle");
+    const std::vector<double> c = cycle_crossings(time, signal);
     if (c.size() < 2) return std::nullopt;
     const int n = std::min(max_cycles, static_cast<int>(c.size()) - 1);
     return CycleWindow{c[c.size() - 1 - static_cast<std::size_t>(n)], c.back(), n};

@@ -13,6 +13,7 @@
 /// velocity (u (u.n)), so its average is the average of its instantaneous values over the window.
 #include <deque>
 #include <optional>
+#include <string>
 #include <vector>
 
 #include "solver/flow_fields.hpp"
@@ -40,6 +41,58 @@ std::optional<CycleWindow> last_whole_cycles(const std::vector<double>& time,
 /// Mean of a sampled signal over [window.begin, window.end] (trapezoidal, ends interpolated).
 double window_average(const std::vector<double>& time, const std::vector<double>& signal,
                       const CycleWindow& window);
+
+/// (q(end) - q(begin)) / (end - begin), q interpolated linearly between samples: the window
+/// mean of dq/dt (for the rate-of-change term of the control-volume route).
+double window_change_rate(const std::vector<double>& time, const std::vector<double>& q,
+                          const CycleWindow& window);
+
+/// The upward crossings that delimit the whole cycles of a record, as last_whole_cycles finds
+/// them (level and band from the second half); empty for a steady signal.
+std::vector<double> cycle_crossings(const std::vector<double>& time,
+                                    const std::vector<double>& signal);
+
+/// A figure over the window of whole cycles and its cycle-to-cycle spread: the largest
+/// deviation of one cycle's own figure from it.
+struct CycleFigure {
+    double value = 0.0;
+    double spread = 0.0;
+};
+
+/// When the cycles of a record count as one periodic state (a limit cycle): at least
+/// `min_cycles`, and every cycle's period and lift amplitude within these fractions of the
+/// window's. On the cylinder at Re 100 the cycles of a settled run agree to about 1e-4; a
+/// start-up whose lift still grows or decays changes its amplitude by several percent a cycle.
+struct PeriodicityTolerance {
+    int min_cycles = 3;
+    double period = 0.01;     ///< relative spread of the period
+    double amplitude = 0.02;  ///< relative spread of the lift amplitude (half peak-to-peak)
+};
+
+/// What a shedding run is read by, over its last whole cycles of the lift (the cycles of
+/// cycle_crossings). Means are trapezoidal over the window; per cycle, over that cycle.
+struct SheddingStatistics {
+    int cycles = 0;  ///< whole cycles used
+    CycleWindow window;
+    CycleFigure strouhal;  ///< 1 / period (reference length / U_inf units); per cycle 1 / its own
+    CycleFigure cl_mean;   ///< time mean of Cl
+    CycleFigure cd_mean;   ///< time mean of Cd
+    CycleFigure cm_mean;   ///< time mean of Cm
+    CycleFigure cl_rms;    ///< root mean square of Cl - (window mean of Cl)
+    CycleFigure cl_peak;   ///< largest |Cl - window mean| (sampled values)
+    CycleFigure cl_amplitude;  ///< half the peak-to-peak range of Cl
+    CycleFigure cd_amplitude;  ///< half the peak-to-peak range of Cd
+    bool periodic = false;     ///< the cycles pass the PeriodicityTolerance
+    std::string not_periodic;  ///< why they do not, in words (empty when periodic)
+};
+
+/// Statistics of the last `max_cycles` whole cycles (fewer when the record holds fewer);
+/// nullopt when it holds no whole cycle. Histories are sampled at the same times.
+std::optional<SheddingStatistics> shedding_statistics(const std::vector<double>& time,
+                                                      const std::vector<double>& cl,
+                                                      const std::vector<double>& cd,
+                                                      const std::vector<double>& cm, int max_cycles,
+                                                      const PeriodicityTolerance& tolerance = {});
 
 /// Time-weighted running mean of the flow fields (u, v, pressure, eddy viscosity).
 class FieldMean {

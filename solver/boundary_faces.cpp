@@ -8,6 +8,15 @@ VelocityOverride moving_wall(std::string segment, Vec2 wall_velocity) {
     return {std::move(segment), [wall_velocity](Vec2, double) { return wall_velocity; }};
 }
 
+VelocityOverride spinning_wall(std::string segment, Vec2 centre,
+                               std::function<double(double t)> surface_speed) {
+    return {std::move(segment), [centre, speed = std::move(surface_speed)](Vec2 x, double t) {
+                const Vec2 r = x - centre;
+                const double length = norm(r);
+                return length > 0.0 ? (speed(t) / length) * rotate_ccw(r) : Vec2{};
+            }};
+}
+
 namespace {
 
 int side_length(const StructuredGrid& g, Side s) {

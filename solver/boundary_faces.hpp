@@ -22,6 +22,12 @@ struct VelocityOverride {
 /// A wall sliding at constant velocity (a cavity lid), as an override.
 VelocityOverride moving_wall(std::string segment, Vec2 wall_velocity);
 
+/// A wall spinning counter-clockwise about `centre` with tangential speed `surface_speed(t)`
+/// (free-stream units; negative: clockwise), as an override: u = s(t) k x (x - c) / |x - c|.
+/// Tangential to a circle centred at `centre`, so no flow passes its wall.
+VelocityOverride spinning_wall(std::string segment, Vec2 centre,
+                               std::function<double(double t)> surface_speed);
+
 /// One physical boundary face.
 struct BoundaryFace {
     int i = 0;  ///< interior cell next to the face

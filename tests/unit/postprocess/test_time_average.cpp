@@ -1,6 +1,7 @@
 // Whole-cycle detection and averages on synthetic lift signals.
 #include <gtest/gtest.h>
 
+#include <algorithm>
 #include <cmath>
 #include <numbers>
 
@@ -95,6 +96,83 @@ TEST(CycleAverager, MeanFieldsOverWholeCycles) {
     EXPECT_NEAR(m.v[1], 1.0, 1e-14);  // a constant is averaged exactly
     EXPECT_EQ(m.eddy_viscosity.size(), 2u);
     EXPECT_EQ(m.eddy_viscosity[0], 0.0);  // laminar input: zeros
+}
+
+/// Cl = lift(t) with an amplitude scaled by growth^(t / period); Cd = 1.3 + 0.01 cos(2 w t); Cm =
+/// 0.
+struct Forces {
+    std::vector<double> time, cl, cd, cm;
+};
+
+Forces shedding(double duration, double growth) {
+    Forces f;
+    const double w = 2.0 * std::numbers::pi / period;
+    for (int k = 1; k * dt <= duration; ++k) {
+        const double t = k * dt, scale = std::pow(growth, t / period);
+        f.time.push_back(t);
+        f.cl.push_back(mean_cl + scale * (lift(t) - mean_cl - 0.4 * std::exp(-t / period)));
+        f.cd.push_back(1.3 + 0.01 * std::cos(2.0 * w * t));
+        f.cm.push_back(0.0);
+    }
+    return f;
+}
+
+TEST(SheddingStatistics, FiguresOfAPeriodicRecordAndTheirSpread) {
+    const Forces f = shedding(30.0 * period, 1.0);
+    const auto s = shedding_statistics(f.time, f.cl, f.cd, f.cm, 10);
+    ASSERT_TRUE(s.has_value());
+    EXPECT_EQ(s->cycles, 10);
+    EXPECT_TRUE(s->periodic) << s->not_periodic;
+    // Crossings interpolated linearly at 97 samples a cycle: O(dt^2) of a period.
+    EXPECT_NEAR(s->strouhal.value, 1.0 / period, 1e-3 / period);
+    EXPECT_LT(s->strouhal.spread, 2e-3 / period);
+    // Window means of exact harmonics over whole cycles: off by the end interpolation only.
+    EXPECT_NEAR(s->cl_mean.value, mean_cl, 1e-4);
+    EXPECT_NEAR(s->cd_mean.value, 1.3, 1e-5);
+    // rms of A sin(wt) + 0.3 A sin(2wt + 0.4) is A sqrt((1 + 0.09) / 2); trapezoid error O(dt^2).
+    EXPECT_NEAR(s->cl_rms.value, amplitude * std::sqrt(1.09 / 2.0), 1e-4);
+    // Half the peak-to-peak range and the peak of the sampled signal, within a sample's change.
+    const double step_change = amplitude * 2.0 * std::numbers::pi / 97.3;
+    double hi = -1.0, lo = 1.0;
+    for (int k = 0; k < 100000; ++k) {
+        const double t = period * k / 100000.0;
+        const double x = lift(t + 40.0 * period) - mean_cl;
+        hi = std::max(hi, x);
+        lo = std::min(lo, x);
+    }
+    EXPECT_NEAR(s->cl_amplitude.value, 0.5 * (hi - lo), step_change);
+    EXPECT_NEAR(s->cl_peak.value, std::max(hi, -lo), step_change);
+    EXPECT_NEAR(s->cd_amplitude.value, 0.01, 1e-4);
+    EXPECT_LT(s->cl_amplitude.spread, step_change);
+}
+
+TEST(SheddingStatistics, AGrowingLiftIsNotYetPeriodic) {
+    const Forces f = shedding(30.0 * period, 1.05);  // 5 % a cycle
+    const auto s = shedding_statistics(f.time, f.cl, f.cd, f.cm, 6);
+    ASSERT_TRUE(s.has_value());
+    EXPECT_FALSE(s->periodic);
+    EXPECT_NE(s->not_periodic.find("grows"), std::string::npos) << s->not_periodic;
+    // The same signal falling: the words say so.
+    const Forces g = shedding(30.0 * period, 1.0 / 1.05);
+    const auto d = shedding_statistics(g.time, g.cl, g.cd, g.cm, 6);
+    ASSERT_TRUE(d.has_value());
+    EXPECT_FALSE(d->periodic);
+    EXPECT_NE(d->not_periodic.find("falls"), std::string::npos) << d->not_periodic;
+}
+
+TEST(SheddingStatistics, TooFewCyclesOrNoneAtAll) {
+    const Forces f = shedding(3.3 * period, 1.0);
+    const auto s = shedding_statistics(f.time, f.cl, f.cd, f.cm, 10);
+    ASSERT_TRUE(s.has_value());
+    EXPECT_LT(s->cycles, 3);
+    EXPECT_FALSE(s->periodic);
+    EXPECT_NE(s->not_periodic.find("only"), std::string::npos) << s->not_periodic;
+    std::vector<double> t, flat;
+    for (int k = 0; k < 300; ++k) {
+        t.push_back(k * dt);
+        flat.push_back(0.3);
+    }
+    EXPECT_FALSE(shedding_statistics(t, flat, flat, flat, 5).has_value());
 }
 
 }  // namespace
