@@ -142,5 +142,43 @@ TEST(CaseFile, InvalidTomlGivesLine) {
     EXPECT_NE(msg.find("case.toml:2"), std::string::npos) << msg;
 }
 
+TEST(CaseFile, CircleIsASectionOfItsOwn) {
+    const char* circle =
+        "[geometry]\ncircle = true\n[mesh]\naround = 128\nfar_field = 60\n"
+        "[flow]\nreynolds = 100\n[run]\nmode = \"unsteady\"\nstart_spin = 0.25\n";
+    const CaseSpec c = parse_case_text(circle, "case.toml", ".");
+    EXPECT_TRUE(c.geometry.circle);
+    EXPECT_TRUE(c.geometry.naca.empty());
+    EXPECT_EQ(c.geometry.name, "circle");
+    EXPECT_DOUBLE_EQ(c.run.start_spin, 0.25);
+    EXPECT_DOUBLE_EQ(parse_case_text(minimal_case, "case.toml", ".").run.start_spin, 0.0);
+    // Exactly one section; the circle has no trailing edge, no wake cut, no angle of attack.
+    std::string msg = error_of(std::string(circle), {"geometry.naca=\"0012\""});
+    EXPECT_NE(msg.find("exactly one of"), std::string::npos) << msg;
+    EXPECT_NE(msg.find("circle = true"), std::string::npos) << msg;
+    msg = error_of(circle, {"geometry.circle=false"});
+    EXPECT_NE(msg.find("circle = false"), std::string::npos) << msg;
+    msg = error_of(circle, {"geometry.trailing_edge=\"closed\""});
+    EXPECT_NE(msg.find("trailing_edge"), std::string::npos) << msg;
+    msg = error_of(circle, {"mesh.wake=24"});
+    EXPECT_NE(msg.find("no wake key"), std::string::npos) << msg;
+    msg = error_of(circle, {"flow.alpha=4"});
+    EXPECT_NE(msg.find("no angle of attack"), std::string::npos) << msg;
+    EXPECT_NE(msg.find("alpha = 4"), std::string::npos) << msg;
+}
+
+TEST(CaseFile, StartSpinOnlyForAnUnsteadyCircle) {
+    std::string msg =
+        error_of(std::string(minimal_case) + "[run]\nmode = \"unsteady\"\nstart_spin = 0.3\n");
+    EXPECT_NE(msg.find("case.toml:15"), std::string::npos) << msg;
+    EXPECT_NE(msg.find("only a circle"), std::string::npos) << msg;
+    msg = error_of("[geometry]\ncircle = true\n[flow]\nreynolds = 100\n[run]\nstart_spin = 0.3\n");
+    EXPECT_NE(msg.find("mode = \"unsteady\""), std::string::npos) << msg;
+    msg = error_of(
+        "[geometry]\ncircle = true\n[flow]\nreynolds = 100\n[run]\nmode = "
+        "\"unsteady\"\nstart_spin = 5\n");
+    EXPECT_NE(msg.find("from 0 to 2"), std::string::npos) << msg;
+}
+
 }  // namespace
 }  // namespace veer
