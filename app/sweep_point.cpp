@@ -171,12 +171,15 @@ void run_time_accurate(PointRecord& r, PointOutcome& out, const SweepCase& sweep
         out.interrupted = true;
         return;
     }
+    const StabilityVerdict& v = watch->verdict();
     const std::string check =
         watch->judged()
             ? fmt::format(
-                  "a disturbed time-accurate check: lift disturbance {:.2e} over the second "
-                  "quarter of its first {:g} time units, {:.2e} over their last",
-                  watch->verdict().early, from.check_time, watch->verdict().late)
+                  "a disturbed time-accurate check of {:g} time units: lift oscillation {:.2e} "
+                  "over its second quarter, {:.2e} over its last, ratio {:.3f} (kept below "
+                  "{:.3f}, shedding above {:.3f}{})",
+                  watch->judged_span(), v.early, v.late, v.ratio, 1.0 / (1.0 + stability_margin),
+                  1.0 + stability_margin, v.decided ? "" : "; undecided, so run on")
             : std::string();
     if (watch->outcome() == TimeAccurateWatch::Outcome::kept) {
         r.note = "steady solution kept by " + check;

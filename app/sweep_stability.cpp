@@ -2,6 +2,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <limits>
 
 #include "mesh/errors.hpp"
 
@@ -19,21 +20,58 @@ FlowFields disturbed(const FlowFields& fields, const GridMetrics& metrics,
     return out;
 }
 
+namespace {
+
+/// sqrt(2) times the root mean square of q about its least-squares line over samples [a, b).
+double oscillation(const std::vector<double>& t, const std::vector<double>& q, std::size_t a,
+                   std::size_t b) {
+    if (b < a + 3) return 0.0;
+    const double n = static_cast<double>(b - a);
+    double st = 0.0, sq = 0.0;
+    for (std::size_t k = a; k < b; ++k) st += t[k], sq += q[k];
+    const double mt = st / n, mq = sq / n;
+    double stt = 0.0, stq = 0.0;
+    for (std::size_t k = a; k < b; ++k) {
+        stt += (t[k] - mt) * (t[k] - mt);
+        stq += (t[k] - mt) * (q[k] - mq);
+    }
+    const double slope = stt > 0.0 ? stq / stt : 0.0;
+    double ss = 0.0;
+    for (std::size_t k = a; k < b; ++k) {
+        const double r = q[k] - mq - slope * (t[k] - mt);
+        ss += r * r;
+    }
+    return std::sqrt(2.0 * ss / n);
+}
+
+}  // namespace
+
 StabilityVerdict judge_disturbance(const ForceRecord& history, double cl_steady,
                                    double still_moving) {
     StabilityVerdict v;
-    if (history.time.size() < 4) return v;
-    const double t0 = history.time.front();
-    const double span = history.time.back() - t0;
-    for (std::size_t k = 0; k < history.time.size(); ++k) {
-        const double s = (history.time[k] - t0) / span;
-        const double deviation = std::abs(history.cl[k] - cl_steady);
-        if (s >= 0.25 && s <= 0.5) v.early = std::max(v.early, deviation);
-        if (s >= 0.75) v.late = std::max(v.late, deviation);
-    }
-    // Below round-off-sized deviations a "growth" is noise, not a mode.
+    const std::vector<double>& t = history.time;
+    if (t.size() < 16) return v;
+    const double t0 = t.front(), span = t.back() - t0;
+    auto at = [&](double fraction) {  // first sample at or after the fraction of the span
+        return static_cast<std::size_t>(std::lower_bound(t.begin(), t.end(), t0 + fraction * span) -
+                                        t.begin());
+    };
+    const std::size_t q1 = at(0.25), q2 = at(0.5), q3 = at(0.75), end = t.size();
+    v.early = oscillation(t, history.cl, q1, q2);
+    v.late = oscillation(t, history.cl, q3, end);
+    double mean = 0.0;
+    for (std::size_t k = q3; k < end; ++k) mean += history.cl[k] / static_cast<double>(end - q3);
+    v.offset = mean - cl_steady;
+    // Below round-off-sized oscillations a "growth" is noise, not a mode.
     constexpr double noise_floor = 1e-7;
-    v.unstable = (v.late > v.early && v.late > noise_floor) || v.late > still_moving;
+    if (v.late <= noise_floor) {
+        v.ratio = v.early > 0.0 ? v.late / v.early : 0.0;
+        return v;  // kept
+    }
+    v.ratio = v.early > 0.0 ? v.late / v.early : std::numeric_limits<double>::infinity();
+    v.unstable = v.ratio > 1.0 + stability_margin;
+    const bool decayed = v.ratio < 1.0 / (1.0 + stability_margin) && v.late < still_moving;
+    v.decided = v.unstable || decayed;
     return v;
 }
 
@@ -56,13 +94,21 @@ bool TimeAccurateWatch::add(double time, double cl, double cd) {
         m_until_check.cl.push_back(cl);
         m_until_check.cd.push_back(cd);
         m_until_check.cm.push_back(0.0);
-        if (elapsed >= m_check_time) {
-            m_judged = true;
+        if (m_judge_at <= 0.0) m_judge_at = m_check_time;
+        // The check time, allowing for the round-off of a sum of steps.
+        if (elapsed >= m_judge_at * (1.0 - 1e-9)) {
             m_verdict = judge_disturbance(m_until_check, m_cl_steady);
-            m_until_check = {};
-            if (!m_verdict.unstable) {
-                m_outcome = Outcome::kept;
-                return true;
+            const bool last_chance = m_judge_at >= 4.0 * m_check_time * (1.0 - 1e-9);
+            if (m_verdict.decided || last_chance) {
+                m_judged = true;
+                m_until_check = {};
+                if (!m_verdict.unstable && m_verdict.decided) {
+                    m_outcome = Outcome::kept;
+                    return true;
+                }
+                m_verdict.unstable = true;  // grew, or still undecided: it runs on as unsteady
+            } else {
+                m_judge_at *= 2.0;
             }
         }
     }
