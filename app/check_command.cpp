@@ -18,15 +18,23 @@ int run_check_command(const CaseOptions& options) {
                    ? fmt::format(", blunt trailing edge of {:.3g}% chord closed by a wedge",
                                  100 * mesh.section.source_te_gap)
                    : "");
-    fmt::print(
-        "  grid      {} x {} cells (around {}, wake {} each side, normal {}), far field {} "
-        "chords, first cell {:.3g} chords\n",
-        mesh.grid.ni(), mesh.grid.nj(), mesh.spec.around, mesh.spec.wake, mesh.spec.normal,
-        mesh.spec.far_field, mesh.spec.first_cell);
+    if (c.geometry.circle)
+        fmt::print(
+            "  grid      O-grid of {} x {} cells (around {}, normal {}), far field {} diameters, "
+            "first cell {:.3g} diameters; lengths, Re and coefficients on the diameter\n",
+            mesh.grid.ni(), mesh.grid.nj(), mesh.spec.around, mesh.spec.normal, mesh.spec.far_field,
+            mesh.spec.first_cell);
+    else
+        fmt::print(
+            "  grid      {} x {} cells (around {}, wake {} each side, normal {}), far field {} "
+            "chords, first cell {:.3g} chords\n",
+            mesh.grid.ni(), mesh.grid.nj(), mesh.spec.around, mesh.spec.wake, mesh.spec.normal,
+            mesh.spec.far_field, mesh.spec.first_cell);
     fmt::print("  flow      Re {:g}, alpha {:g} deg, {}\n", c.flow.reynolds, c.flow.alpha_deg,
                c.model);
-    fmt::print("  run       {} (cap {} steps{})\n", c.run.mode, c.run.steps,
-               c.run.mode == "unsteady" ? fmt::format(", end time {:g}", c.run.end_time) : "");
+    fmt::print("  run       {} (cap {} steps{}{})\n", c.run.mode, c.run.steps,
+               c.run.mode == "unsteady" ? fmt::format(", end time {:g}", c.run.end_time) : "",
+               c.run.start_spin > 0 ? fmt::format(", start spin {:g}", c.run.start_spin) : "");
     for (const std::string& w : mesh.quality.warnings) fmt::print("  warning   {}\n", w);
     return 0;
 }

@@ -1,5 +1,5 @@
-// `veer mesh CASE -o DIR`: the C-grid of a case as VTK files, its quality figures as JSON and a
-// short table.
+// `veer mesh CASE -o DIR`: the C-grid (O-grid for the circle) of a case as VTK files, its quality
+// figures as JSON and a short table.
 #include <fmt/format.h>
 
 #include <nlohmann/json.hpp>
@@ -14,9 +14,17 @@
 
 namespace veer {
 
+namespace {
+
+bool o_grid(const MeshBuild& m) { return m.grid.c_layout() && m.grid.c_layout()->closed(); }
+
+}  // namespace
+
 nlohmann::json mesh_report_json(const MeshBuild& m) {
     const GridQuality& q = m.quality;
-    return {
+    nlohmann::json j = {
+        {"grid", o_grid(m) ? "O-grid" : "C-grid"},
+        {"reference_length", o_grid(m) ? "diameter" : "chord"},
         {"section", m.section.name},
         {"source_trailing_edge_gap", m.section.source_te_gap},
         {"around", m.spec.around},
@@ -40,26 +48,41 @@ nlohmann::json mesh_report_json(const MeshBuild& m) {
         {"far_field_distance", q.far_field_distance},
         {"warnings", q.warnings},
     };
+    if (o_grid(m)) {  // no wake cut, no trailing edge
+        j.erase("wake");
+        j.erase("trailing_edge_non_orthogonality_deg");
+        j.erase("source_trailing_edge_gap");
+    }
+    return j;
 }
 
 void print_mesh_table(const MeshBuild& m) {
     const GridQuality& q = m.quality;
-    fmt::print("C-grid of {}\n", m.section.name);
-    fmt::print("  cells                    {} x {} = {} (around {}, wake {} each side)\n", q.ni,
-               q.nj, q.cell_count, m.spec.around, m.spec.wake);
-    fmt::print("  smallest cell area       {:.3e} chords^2 (positive everywhere)\n",
-               q.min_cell_area);
-    fmt::print("  wall non-orthogonality   {:.2f} deg (trailing edge {:.2f} deg)\n",
-               q.wall_non_orthogonality, q.trailing_edge_non_orthogonality);
-    fmt::print(
-        "  first cell height        {:.4e} chords (requested {:.4e}; min {:.4e}, max "
-        "{:.4e})\n",
-        q.first_cell_median, m.spec.first_cell, q.first_cell_min, q.first_cell_max);
+    const bool o = o_grid(m);
+    const char* unit = o ? "diameters" : "chords";
+    fmt::print("{} of {}\n", o ? "O-grid" : "C-grid", m.section.name);
+    if (o)
+        fmt::print(
+            "  cells                    {} x {} = {} (around {}, periodic behind the rear "
+            "point)\n",
+            q.ni, q.nj, q.cell_count, m.spec.around);
+    else
+        fmt::print("  cells                    {} x {} = {} (around {}, wake {} each side)\n", q.ni,
+                   q.nj, q.cell_count, m.spec.around, m.spec.wake);
+    fmt::print("  smallest cell area       {:.3e} {}^2 (positive everywhere)\n", q.min_cell_area,
+               unit);
+    if (o)
+        fmt::print("  wall non-orthogonality   {:.2f} deg\n", q.wall_non_orthogonality);
+    else
+        fmt::print("  wall non-orthogonality   {:.2f} deg (trailing edge {:.2f} deg)\n",
+                   q.wall_non_orthogonality, q.trailing_edge_non_orthogonality);
+    fmt::print("  first cell height        {:.4e} {} (requested {:.4e}; min {:.4e}, max {:.4e})\n",
+               q.first_cell_median, unit, m.spec.first_cell, q.first_cell_min, q.first_cell_max);
     fmt::print("  growth ratio             {:.4f} (cap {:.2f})\n", q.max_growth_ratio,
                m.spec.max_growth);
     fmt::print("  aspect ratio             {:.3g} (largest)\n", q.max_aspect_ratio);
-    fmt::print("  far field                {:.2f} chords (requested {:g})\n", q.far_field_distance,
-               m.spec.far_field);
+    fmt::print("  far field                {:.2f} {} (requested {:g})\n", q.far_field_distance,
+               unit, m.spec.far_field);
     for (const std::string& w : q.warnings) fmt::print("  warning: {}\n", w);
 }
 

@@ -7,6 +7,7 @@
 #include <cmath>
 #include <cstring>
 
+#include "app/commands.hpp"
 #include "app/mesh_pipeline.hpp"
 #include "app/run_report.hpp"
 #include "app/simulation.hpp"
@@ -118,6 +119,23 @@ TEST(CircleRun, SummarySpeaksOfTheCircle) {
     EXPECT_GT(s.at("recirculation_length").get<double>(), 0.5);
     EXPECT_LT(s.at("base_cp").get<double>(), 0.0);
     EXPECT_FALSE(s.contains("time_average"));
+}
+
+TEST(CircleRun, MeshReportNamesTheOGrid) {
+    test::AppScratch scratch;
+    test::write_text(scratch / "circle.toml", circle_case(1, 0.0).text);
+    MeshOptions o;
+    o.input.case_file = scratch / "circle.toml";
+    o.out_dir = scratch / "mesh";
+    ASSERT_EQ(run_mesh_command(o), 0);
+    const nlohmann::json m = read_json_file(scratch / "mesh" / "mesh.json");
+    EXPECT_EQ(m.at("grid"), "O-grid");
+    EXPECT_EQ(m.at("reference_length"), "diameter");
+    EXPECT_EQ(m.at("ni"), 32);
+    EXPECT_FALSE(m.contains("wake"));
+    EXPECT_FALSE(m.contains("trailing_edge_non_orthogonality_deg"));
+    EXPECT_NEAR(m.at("far_field_distance").get<double>(), 20.0, 1e-9);
+    EXPECT_TRUE(std::filesystem::exists(scratch / "mesh" / "mesh.vts"));
 }
 
 }  // namespace
