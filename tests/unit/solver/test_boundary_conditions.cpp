@@ -80,6 +80,22 @@ TEST(BoundaryFaces, UnknownOverrideSegmentIsAnInputErrorNamingIt) {
     }
 }
 
+TEST(BoundaryFaces, SpinningWallIsTangentialWithTheGivenSpeed) {
+    // Counter-clockwise about (0.5, 0) at speed 0.3 t: tangential (no flow through a circle
+    // about that centre), of the given speed at any radius, moving -x at the top.
+    const VelocityOverride spin =
+        spinning_wall("wall", {0.5, 0.0}, [](double t) { return 0.3 * t; });
+    EXPECT_EQ(spin.segment, "wall");
+    for (const Vec2 x : {Vec2{1.0, 0.0}, Vec2{0.5, 0.5}, Vec2{0.2, -0.4}, Vec2{0.9, 0.3}}) {
+        const Vec2 u = spin.velocity(x, 2.0), r = x - Vec2{0.5, 0.0};
+        EXPECT_NEAR(dot(u, r), 0.0, 1e-15);
+        EXPECT_NEAR(std::hypot(u.x, u.y), 0.6, 1e-15);
+        EXPECT_GT(cross(r, u), 0.0);  // counter-clockwise
+    }
+    EXPECT_NEAR(spin.velocity({0.5, 0.5}, 1.0).x, -0.3, 1e-15);
+    EXPECT_EQ(spin.velocity({0.5, 0.0}, 1.0).x, 0.0);  // at the centre: no direction, at rest
+}
+
 /// Ghosts for one condition: the face average (ghost + interior) / 2 is the boundary value for
 /// Dirichlet, the interior value for Neumann (exact arithmetic, so exact comparisons).
 class GhostFill : public ::testing::Test {
