@@ -98,6 +98,21 @@ TEST(CycleAverager, MeanFieldsOverWholeCycles) {
     EXPECT_EQ(m.eddy_viscosity[0], 0.0);  // laminar input: zeros
 }
 
+TEST(TimeAverage, WindowChangeRateIsTheMeanOfTheDerivative) {
+    // q = t^2 sampled every 0.1: linear interpolation at the window's ends, so the rate is exact
+    // for the interpolant: (q(b) - q(a)) / (b - a) with q(a), q(b) on the chords between samples.
+    std::vector<double> t, q;
+    for (int k = 0; k <= 100; ++k) {
+        t.push_back(0.1 * k);
+        q.push_back(0.01 * k * k);
+    }
+    const CycleWindow w{2.0, 7.0, 1};  // on samples: exact q
+    EXPECT_NEAR(window_change_rate(t, q, w), (49.0 - 4.0) / 5.0, 1e-12);
+    const CycleWindow between{2.05, 6.95, 1};  // between samples: chord values
+    const double qa = 0.5 * (4.0 + 4.41), qb = 0.5 * (47.61 + 49.0);
+    EXPECT_NEAR(window_change_rate(t, q, between), (qb - qa) / 4.9, 1e-12);
+}
+
 /// Cl = lift(t) with an amplitude scaled by growth^(t / period); Cd = 1.3 + 0.01 cos(2 w t); Cm =
 /// 0.
 struct Forces {
