@@ -18,17 +18,6 @@ namespace {
     throw InputError(out.str());
 }
 
-void check_surface(const std::vector<Vec2>& surface, const CGridSpec& spec) {
-    if (static_cast<int>(surface.size()) != spec.around + 1) {
-        std::ostringstream out;
-        out << "mesh: around = " << spec.around << " needs " << spec.around + 1
-            << " surface nodes, got " << surface.size();
-        throw InputError(out.str());
-    }
-    if (norm(surface.front() - surface.back()) > 1e-12)
-        throw InputError("mesh: the surface nodes must start and end at the trailing edge");
-}
-
 void fill_segments(StructuredGrid& grid, int wake, int around) {
     const int ni = grid.ni(), nj = grid.nj();
     grid.segments() = {
@@ -60,6 +49,19 @@ std::string describe_fold(const MarchOutcome& fold, const CGridSpec& spec) {
 
 }  // namespace
 
+void check_wall_nodes(const std::vector<Vec2>& surface, int around) {
+    if (static_cast<int>(surface.size()) != around + 1) {
+        std::ostringstream out;
+        out << "mesh: around = " << around << " needs " << around + 1 << " surface nodes, got "
+            << surface.size();
+        throw InputError(out.str());
+    }
+    if (norm(surface.front() - surface.back()) > 1e-12)
+        throw InputError(
+            "mesh: the surface nodes must start and end at the same point (the trailing edge, "
+            "or the circle's rear point)");
+}
+
 void validate_cgrid_spec(const CGridSpec& spec) {
     if (spec.around < 16 || spec.around > 16384 || spec.around % 2 != 0)
         bad_value("around", spec.around, "an even integer in [16, 16384]");
@@ -90,7 +92,7 @@ int normal_cells_for_growth(double first_cell, double far_field, double max_grow
 
 StructuredGrid generate_cgrid(const std::vector<Vec2>& surface, const CGridSpec& spec) {
     validate_cgrid_spec(spec);
-    check_surface(surface, spec);
+    check_wall_nodes(surface, spec.around);
     const std::vector<Vec2> wall = build_wall_line(surface, spec.wake, spec.far_field);
     StructuredGrid grid(2 * spec.wake + spec.around, spec.normal);
     for (int i = 0; i <= grid.ni(); ++i) grid.node(i, 0) = wall[static_cast<std::size_t>(i)];

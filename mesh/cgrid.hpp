@@ -32,4 +32,7 @@ int normal_cells_for_growth(double first_cell, double far_field, double max_grow
 /// Throws InputError naming the key of the first value of `spec` out of its allowed range.
 void validate_cgrid_spec(const CGridSpec& spec);
 
+/// Throws InputError unless `surface` holds around + 1 nodes whose first and last coincide.
+void check_wall_nodes(const std::vector<Vec2>& surface, int around);
+
 }  // namespace veer

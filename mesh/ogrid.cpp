@@ -9,17 +9,6 @@
 namespace veer {
 namespace {
 
-void check_surface(const std::vector<Vec2>& surface, const CGridSpec& spec) {
-    if (static_cast<int>(surface.size()) != spec.around + 1) {
-        std::ostringstream out;
-        out << "mesh: around = " << spec.around << " needs " << spec.around + 1
-            << " surface nodes, got " << surface.size();
-        throw InputError(out.str());
-    }
-    if (norm(surface.front() - surface.back()) > 1e-12)
-        throw InputError("mesh: an O-grid needs a closed surface (first node == last node)");
-}
-
 /// Unit normal into the fluid at each wall node: +90 degrees from the central chord, the chord
 /// wrapping across the seam. Mirror-symmetric nodes give mirror-symmetric normals to the bit
 /// (the chord of the mirrored node is the mirrored chord, negated; negation and swapping are
@@ -59,7 +48,7 @@ StructuredGrid generate_ogrid(const std::vector<Vec2>& surface, const CGridSpec&
     CGridSpec checked = spec;
     checked.wake = 2;  // no wake on an O-grid; every other key is checked as for a C-grid
     validate_cgrid_spec(checked);
-    check_surface(surface, spec);
+    check_wall_nodes(surface, spec.around);
     const std::vector<double> steps = geometric_steps(spec.first_cell, spec.far_field, spec.normal);
     const std::vector<Vec2> normals = wall_normals(surface);
     StructuredGrid grid(spec.around, spec.normal);
