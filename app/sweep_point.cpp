@@ -19,6 +19,7 @@
 #include "io/output_dir.hpp"
 #include "mesh/errors.hpp"
 #include "postprocess/separation.hpp"
+#include "postprocess/time_average.hpp"
 
 namespace veer {
 namespace {
@@ -91,6 +92,15 @@ void take_cycle_statistics(PointRecord& r, const UnsteadyStats& st) {
     r.cm_amplitude = st.cm_amplitude;
     r.cycles = st.cycles;
     r.strouhal = st.strouhal;
+}
+
+/// "; not yet periodic: ..." when the last whole cycles of a record still differ (its averages
+/// then hold part of the start-up transient), else "".
+std::string periodicity_note(const ForceRecord& h) {
+    const auto s = shedding_statistics(h.time, h.cl, h.cd, h.cm, summary_cycles);
+    if (!s || s->periodic) return "";
+    return "; not yet periodic over its last whole cycles: " + s->not_periodic +
+           " (its averages still hold part of the start-up; a longer --unsteady-time settles it)";
 }
 
 ForceRecord read_force_record(const fs::path& history) {
@@ -225,6 +235,7 @@ void run_time_accurate(PointRecord& r, PointOutcome& out, const SweepCase& sweep
             take_cycle_statistics(r, st);
             if (st.periodic) {
                 if (auto m = sampler->mean(st.window_begin, st.window_end)) r.cl_momentum = m;
+                r.note += periodicity_note(history);
             } else {
                 r.regime = "steady";
                 r.note +=
@@ -326,6 +337,7 @@ PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const Structu
                     const UnsteadyStats st = unsteady_stats(history);
                     r.regime = st.periodic ? "unsteady" : "steady";
                     take_cycle_statistics(r, st);
+                    if (st.periodic) r.note += periodicity_note(history);
                 }
             }
             break;
