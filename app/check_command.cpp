@@ -14,9 +14,9 @@ int run_check_command(const CaseOptions& options) {
     fmt::print("{}: valid case\n", c.path.string());
     fmt::print("  section   {} ({} outline points{})\n", mesh.section.name,
                mesh.section.points.size(),
-               mesh.section.source_te_gap > 0
+               mesh.section.closure.gap > 0
                    ? fmt::format(", blunt trailing edge of {:.3g}% chord closed by a wedge",
-                                 100 * mesh.section.source_te_gap)
+                                 100 * mesh.section.closure.gap)
                    : "");
     if (c.geometry.circle)
         fmt::print(

@@ -26,7 +26,7 @@ nlohmann::json mesh_report_json(const MeshBuild& m) {
         {"grid", o_grid(m) ? "O-grid" : "C-grid"},
         {"reference_length", o_grid(m) ? "diameter" : "chord"},
         {"section", m.section.name},
-        {"source_trailing_edge_gap", m.section.source_te_gap},
+        {"source_trailing_edge_gap", m.section.closure.gap},
         {"around", m.spec.around},
         {"normal", m.spec.normal},
         {"wake", m.spec.wake},

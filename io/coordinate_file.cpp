@@ -5,7 +5,9 @@
 #include <fstream>
 #include <optional>
 #include <string>
+#include <vector>
 
+#include "io/coordinate_layout.hpp"
 #include "mesh/errors.hpp"
 
 namespace veer {
@@ -40,22 +42,36 @@ std::optional<Vec2> parse_pair(const std::string& line) {
     return Vec2{values[0], values[1]};
 }
 
+/// The lines of a file, split at LF, CRLF or a lone CR.
+std::vector<std::string> file_lines(std::istream& in) {
+    std::vector<std::string> lines(1);
+    for (char c; in.get(c);) {
+        if (c == '\r' && in.peek() == '\n') continue;  // CRLF: the LF ends the line
+        if (c == '\n' || c == '\r')
+            lines.emplace_back();
+        else
+            lines.back() += c;
+    }
+    return lines;
+}
+
 }  // namespace
 
 RawOutline read_coordinate_file(const std::filesystem::path& path) {
     const std::string name = path.string();
-    std::ifstream in(path);
+    std::ifstream in(path, std::ios::binary);
     if (!in) throw InputError(name + ": cannot open");
-    RawOutline raw;
-    raw.source = name;
-    std::string line;
+    FileBlocks b{name, {}};
+    bool title_allowed = true, had_title = false, gap = true;
     int number = 0;
-    bool title_allowed = true;
-    bool had_title = false;
-    while (std::getline(in, line)) {
+    for (const std::string& line : file_lines(in)) {
         ++number;
         const std::string text = trim(line);
-        if (text.empty() || text.front() == '#') continue;
+        if (text.empty()) {
+            gap = true;
+            continue;
+        }
+        if (text.front() == '#') continue;
         const std::optional<Vec2> point = parse_pair(text);
         if (!point) {
             if (title_allowed) {
@@ -67,14 +83,15 @@ RawOutline read_coordinate_file(const std::filesystem::path& path) {
                              ": expected two numbers \"x y\", found \"" + text + "\"");
         }
         title_allowed = false;
-        raw.points.push_back(*point);
-        raw.lines.push_back(number);
+        if (gap) b.blocks.emplace_back();
+        gap = false;
+        b.blocks.back().push_back({*point, number});
     }
-    if (raw.points.empty()) {
+    if (b.blocks.empty()) {
         throw InputError(name + (had_title ? ": no coordinates found (only a title line)"
                                            : ": no coordinates found (empty file)"));
     }
-    return raw;
+    return assemble_outline(b);
 }
 
 }  // namespace veer

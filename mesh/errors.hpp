@@ -31,9 +31,9 @@ namespace detail {
 }  // namespace veer
 
 /// Always-on invariant check; throws veer::InternalError with the message.
-#define VEER_VERIFY(cond, msg)                                                                     \
-    do {                                                                                           \
-        if (!(cond)) ::veer::detail::verify_failed(#cond, (msg), __FILE__, __LINE__);              \
+#define VEER_VERIFY(cond, msg)                                                        \
+    do {                                                                              \
+        if (!(cond)) ::veer::detail::verify_failed(#cond, (msg), __FILE__, __LINE__); \
     } while (0)
 
 /// Debug-only invariant check.

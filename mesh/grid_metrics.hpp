@@ -1,8 +1,8 @@
 #pragma once
 /// Finite-volume metrics of a structured block: cell areas and centroids, face area vectors.
 ///
-/// Layout (i fastest): cells ni x nj; i-faces (ni+1) x nj, face (fi, j) lies between cells (fi-1, j)
-/// and (fi, j); j-faces ni x (nj+1), face (i, fj) lies between cells (i, fj-1) and (i, fj).
+/// Layout (i fastest): cells ni x nj; i-faces (ni+1) x nj, face (fi, j) lies between cells (fi-1,
+/// j) and (fi, j); j-faces ni x (nj+1), face (i, fj) lies between cells (i, fj-1) and (i, fj).
 #include <vector>
 
 #include "mesh/structured_grid.hpp"

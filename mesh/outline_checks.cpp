@@ -3,18 +3,20 @@
 #include <algorithm>
 #include <cmath>
 #include <numbers>
+#include <optional>
 #include <sstream>
 
 #include "mesh/errors.hpp"
 
 namespace veer {
-namespace {
 
 std::string format_point(Vec2 p) {
     std::ostringstream out;
     out << "(" << p.x << ", " << p.y << ")";
     return out.str();
 }
+
+namespace {
 
 /// Largest distance of a point from the trailing-edge midpoint: about the chord.
 double outline_size(const std::vector<Vec2>& p) {
@@ -57,7 +59,9 @@ void check_repeats(const RawOutline& raw, double size) {
     for (std::size_t k = 1; k < p.size(); ++k) {
         if (norm(p[k] - p[k - 1]) <= OutlineTolerances::duplicate_distance * size) {
             throw InputError(outline_location(raw, k) + ": point " + format_point(p[k]) +
-                             " repeats the previous one; consecutive points must differ");
+                             " repeats the previous one (" + point_label(raw, k - 1) +
+                             "): a duplicated station; each station is listed once" +
+                             neighbours_text(raw, k - 1, k));
         }
     }
 }
@@ -76,24 +80,72 @@ void check_closure(const RawOutline& raw, double size) {
     }
 }
 
+/// Whether the outline turns back by more than the limit at point k.
+bool doubles_back(const std::vector<Vec2>& p, std::size_t k) {
+    const double limit = std::cos(OutlineTolerances::max_turn_degrees * std::numbers::pi / 180.0);
+    const Vec2 a = p[k] - p[k - 1], b = p[k + 1] - p[k];
+    return dot(a, b) < limit * norm(a) * norm(b);
+}
+
+double turn_degrees(const std::vector<Vec2>& p, std::size_t k) {
+    const Vec2 a = p[k] - p[k - 1], b = p[k + 1] - p[k];
+    const double c = dot(a, b) / (norm(a) * norm(b));
+    return std::acos(std::clamp(c, -1.0, 1.0)) * 180.0 / std::numbers::pi;
+}
+
+/// Whether the points around k, k+1 (k-2 .. k+3, clipped) run on without turning back once
+/// `change` is applied to a copy of them (local indices: k is 2).
+template <class Change>
+bool runs_on_after(const std::vector<Vec2>& p, std::size_t k, Change change) {
+    const std::size_t from = k >= 2 ? k - 2 : 0, to = std::min(p.size(), k + 4);
+    std::vector<Vec2> local(p.begin() + static_cast<std::ptrdiff_t>(from),
+                            p.begin() + static_cast<std::ptrdiff_t>(to));
+    change(local, k - from);
+    for (std::size_t q = 1; q + 1 < local.size(); ++q)
+        if (doubles_back(local, q)) return false;
+    return true;
+}
+
+/// The outline turns back at k (and maybe k+1): a pair listed in reverse order (swapping them
+/// mends it), one point out of place (leaving it out mends it), or a doubling back.
+[[noreturn]] void refuse_reversal(const RawOutline& raw, std::size_t k) {
+    const auto& p = raw.points;
+    std::ostringstream out;
+    const auto swap = [](std::vector<Vec2>& v, std::size_t q) { std::swap(v[q], v[q + 1]); };
+    std::optional<std::size_t> misplaced;
+    for (const std::size_t d : {std::size_t{1}, std::size_t{0}}) {
+        const auto drop = [d](std::vector<Vec2>& v, std::size_t q) {
+            v.erase(v.begin() + static_cast<std::ptrdiff_t>(q + d));
+        };
+        if (!misplaced && k + d + 1 < p.size() && runs_on_after(p, k, drop)) misplaced = k + d;
+    }
+    if (k + 2 < p.size() && runs_on_after(p, k, swap)) {
+        out << outline_location(raw, k) << ": " << point_label(raw, k) << " and "
+            << point_label(raw, k + 1)
+            << " are in reverse order (the outline runs back between them); swap them"
+            << neighbours_text(raw, k, k + 1);
+    } else if (misplaced) {
+        const std::size_t bad = *misplaced;
+        out << outline_location(raw, bad) << ": point " << format_point(p[bad])
+            << " is out of place: the outline runs back to it and turns again (by "
+            << turn_degrees(p, bad) << " degrees; at most " << OutlineTolerances::max_turn_degrees
+            << " allowed away from the trailing edge)" << neighbours_text(raw, bad, bad);
+    } else {
+        out << outline_location(raw, k) << ": the outline doubles back on itself at "
+            << format_point(p[k]) << " (turns by " << turn_degrees(p, k) << " degrees; at most "
+            << OutlineTolerances::max_turn_degrees
+            << " allowed away from the trailing edge; the points must start and end at the "
+               "trailing edge)"
+            << neighbours_text(raw, k, k);
+    }
+    throw InputError(out.str());
+}
+
+/// The trailing-edge ends are not checked.
 void check_reversals(const RawOutline& raw) {
     const auto& p = raw.points;
-    const double limit = std::cos(OutlineTolerances::max_turn_degrees * std::numbers::pi / 180.0);
-    for (std::size_t k = 1; k + 1 < p.size(); ++k) {  // the trailing-edge ends are not checked
-        const Vec2 a = p[k] - p[k - 1];
-        const Vec2 b = p[k + 1] - p[k];
-        const double c = dot(a, b) / (norm(a) * norm(b));
-        if (c < limit) {
-            std::ostringstream out;
-            out << outline_location(raw, k) << ": the outline doubles back on itself at "
-                << format_point(p[k]) << " (turns by "
-                << std::acos(std::max(-1.0, c)) * 180.0 / std::numbers::pi << " degrees; at most "
-                << OutlineTolerances::max_turn_degrees
-                << " allowed away from the trailing edge; the points must start and end at the "
-                   "trailing edge)";
-            throw InputError(out.str());
-        }
-    }
+    for (std::size_t k = 1; k + 1 < p.size(); ++k)
+        if (doubles_back(p, k)) refuse_reversal(raw, k);
 }
 
 /// All pairs of non-adjacent segments of the closed polygon (the closing segment from the last
@@ -127,6 +179,20 @@ void check_crossings(const RawOutline& raw, double size) {
 std::string outline_location(const RawOutline& raw, std::size_t k) {
     if (k < raw.lines.size()) return raw.source + ":" + std::to_string(raw.lines[k]);
     return raw.source + " (point " + std::to_string(k + 1) + ")";
+}
+
+std::string point_label(const RawOutline& raw, std::size_t k) {
+    const std::string where = k < raw.lines.size() ? "line " + std::to_string(raw.lines[k])
+                                                   : "point " + std::to_string(k + 1);
+    return where + " " + format_point(raw.points[k]);
+}
+
+std::string neighbours_text(const RawOutline& raw, std::size_t first, std::size_t last) {
+    std::string text = "; neighbours: ";
+    if (first > 0) text += point_label(raw, first - 1);
+    if (first > 0 && last + 1 < raw.points.size()) text += ", ";
+    if (last + 1 < raw.points.size()) text += point_label(raw, last + 1);
+    return text;
 }
 
 void check_outline(const RawOutline& raw) {

@@ -24,9 +24,19 @@ struct OutlineTolerances {
 /// "SOURCE:LINE" where the outline has file lines, else "SOURCE (point K)" with K 1-based.
 std::string outline_location(const RawOutline& raw, std::size_t k);
 
+/// "(x, y)" with six significant digits.
+std::string format_point(Vec2 p);
+
+/// "line L (x, y)" where the outline has file lines, else "point K (x, y)".
+std::string point_label(const RawOutline& raw, std::size_t k);
+
+/// "; neighbours: <label of point first - 1>, <label of point last + 1>" (those that exist).
+std::string neighbours_text(const RawOutline& raw, std::size_t first, std::size_t last);
+
 /// Throws a one-line InputError naming the source (and file line) for the first failed check:
-/// too few points, repeated consecutive points, an outline that does not close, a sharp reversal
-/// away from the trailing edge, a self-intersection.
+/// too few points, repeated consecutive points (a duplicated station), an outline that does not
+/// close, a pair of points in reverse order or a sharp reversal away from the trailing edge, a
+/// self-intersection. Each names the point(s) with their coordinates and neighbours.
 void check_outline(const RawOutline& raw);
 
 }  // namespace veer

@@ -21,6 +21,8 @@ struct RawOutline {
     /// origin of its chord line); empty: make_section takes the point farthest from the
     /// trailing-edge midpoint.
     std::optional<std::size_t> leading_edge = std::nullopt;
+    /// How a file was laid out (e.g. "one closed loop"), for reports; empty when generated.
+    std::string layout;
 };
 
 }  // namespace veer

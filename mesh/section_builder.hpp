@@ -1,5 +1,5 @@
 #pragma once
-/// From a raw outline (a file or a generator) to a checked, normalised Section.
+/// From a raw outline (a file or a generator) to a checked Section in chord units.
 #include <string>
 
 #include "mesh/raw_outline.hpp"
@@ -7,14 +7,14 @@
 
 namespace veer {
 
-/// Checks `raw` and turns it into a Section named `name`: unit chord, leading edge at the origin,
-/// trailing edge at (1, 0), points from the trailing edge along the lower surface to the leading
-/// edge and back along the upper surface, sharp trailing edge (a blunt one is closed with a short
-/// wedge; its gap in chords is kept in `source_te_gap`). Either direction of `raw` is accepted.
-/// Throws a one-line InputError naming `raw.source` (and the file line where known) for fewer than
-/// 20 points, duplicate consecutive points, an outline that does not close (first and last points
-/// more than 5% of the chord apart), a self-intersecting outline or a sharp reversal away from the
-/// trailing edge.
-Section make_section(const RawOutline& raw, const std::string& name);
+/// Checks `raw` and turns it into a Section named `name` (see section.hpp for its form). Either
+/// direction of `raw` is accepted. Points at either end that only draw the trailing-edge base (a
+/// repeated closing point, a closing segment) are set aside; a blunt trailing edge is closed by
+/// a wedge or a fairing (trailing_edge.hpp). The chord line is the generator's own when `raw`
+/// marks its leading edge (a NACA section: nothing is moved), else as `chord_line` asks
+/// (chord_frame.hpp). Throws a one-line InputError naming `raw.source` and the file line where
+/// known for every outline the checks refuse (outline_checks.hpp, outline_smoothness.hpp).
+Section make_section(const RawOutline& raw, const std::string& name,
+                     ChordLineChoice chord_line = ChordLineChoice::automatic);
 
 }  // namespace veer

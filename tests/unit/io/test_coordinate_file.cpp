@@ -133,7 +133,7 @@ TEST(CoordinateFile, ImportedBluntSectionIsClosed) {
     }
     const auto path = write_file("drone_2412.dat", text);
     const Section s = make_section(read_coordinate_file(path), "drone");
-    EXPECT_NEAR(s.source_te_gap, 0.00252, 2e-5);
+    EXPECT_NEAR(s.closure.gap, 0.00252, 2e-5);
     EXPECT_EQ(s.points.front().x, 1.0);
     EXPECT_EQ(s.points.back().x, 1.0);
     EXPECT_EQ(s.points[s.leading_edge].x, 0.0);

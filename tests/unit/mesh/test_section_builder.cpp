@@ -45,7 +45,7 @@ TEST(SectionBuilder, SharpSectionIsNormalisedAndOrdered) {
     EXPECT_EQ(s.name, "drone wing");
     ASSERT_EQ(s.points.size(), 321u);  // a sharp source gains no points
     EXPECT_EQ(s.leading_edge, 160u);
-    EXPECT_EQ(s.source_te_gap, 0.0);
+    EXPECT_EQ(s.closure.gap, 0.0);
     EXPECT_EQ(s.points.front().x, 1.0);
     EXPECT_EQ(s.points.front().y, 0.0);
     EXPECT_EQ(s.points.back().x, 1.0);
@@ -109,7 +109,7 @@ TEST(SectionBuilder, InvariantUnderRotationScaleAndShift) {
     const Section s1 = make_section(moved, "b");
     EXPECT_EQ(s0.leading_edge, s1.leading_edge);
     EXPECT_LT(max_distance(s0, s1), 1e-9);
-    EXPECT_NEAR(s0.source_te_gap, s1.source_te_gap, 1e-12);
+    EXPECT_NEAR(s0.closure.gap, s1.closure.gap, 1e-12);
 }
 
 TEST(SectionBuilder, BluntTrailingEdgeIsClosedWithAWedge) {
@@ -117,7 +117,7 @@ TEST(SectionBuilder, BluntTrailingEdgeIsClosedWithAWedge) {
     // meet about 0.009 chord behind the base (half-angle 8 deg), well within the allowed reach.
     const Section s = make_section(naca_outline("0012", TrailingEdge::open), "blunt");
     ASSERT_EQ(s.points.size(), 323u);  // the tip is added first and last
-    EXPECT_NEAR(s.source_te_gap, 0.00252, 5e-6);
+    EXPECT_NEAR(s.closure.gap, 0.00252, 5e-6);
     EXPECT_EQ(s.points.front().x, 1.0);
     EXPECT_EQ(s.points.back().y, 0.0);
     const Vec2 lower_base = s.points[1], upper_base = s.points[s.points.size() - 2];
@@ -146,7 +146,7 @@ TEST(SectionBuilder, ThickBaseIsClosedDownstreamOfItsMidpoint) {
     const double base = norm(cut.back() - cut.front());
     const double chord0 = 0.5 * (cut.front().x + cut.back().x);
     const Section s = make_section(raw, "cut");
-    EXPECT_NEAR(s.source_te_gap, base / chord0, 1e-12);
+    EXPECT_NEAR(s.closure.gap, base / chord0, 1e-12);
     const double scale = 1.0 / (chord0 + base);
     EXPECT_NEAR(s.points[1].x, chord0 * scale, 1e-12);
     EXPECT_NEAR(s.points[1].y, -0.5 * base * scale, 1e-12);
