@@ -6,6 +6,7 @@
 
 #include "app/commands.hpp"
 #include "app/mesh_pipeline.hpp"
+#include "app/section_notes.hpp"
 #include "io/case_file.hpp"
 #include "io/json_writer.hpp"
 #include "io/output_dir.hpp"
@@ -47,11 +48,13 @@ nlohmann::json mesh_report_json(const MeshBuild& m) {
         {"first_cell_max", q.first_cell_max},
         {"far_field_distance", q.far_field_distance},
         {"warnings", q.warnings},
+        {"section_placement", section_placement_json(m.section)},
     };
     if (o_grid(m)) {  // no wake cut, no trailing edge
         j.erase("wake");
         j.erase("trailing_edge_non_orthogonality_deg");
         j.erase("source_trailing_edge_gap");
+        j.erase("section_placement");
     }
     return j;
 }
@@ -61,6 +64,7 @@ void print_mesh_table(const MeshBuild& m) {
     const bool o = o_grid(m);
     const char* unit = o ? "diameters" : "chords";
     fmt::print("{} of {}\n", o ? "O-grid" : "C-grid", m.section.name);
+    if (!o) print_section_notes(m.section, 25);
     if (o)
         fmt::print(
             "  cells                    {} x {} = {} (around {}, periodic behind the rear "

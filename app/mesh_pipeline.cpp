@@ -3,6 +3,7 @@
 #include "io/coordinate_file.hpp"
 #include "mesh/cgrid.hpp"
 #include "mesh/circle.hpp"
+#include "mesh/fold_diagnosis.hpp"
 #include "mesh/naca.hpp"
 #include "mesh/ogrid.hpp"
 #include "mesh/section_builder.hpp"
@@ -18,7 +19,8 @@ Section build_section(const CaseSpec& c) {
             c.geometry.closed_trailing_edge ? TrailingEdge::closed : TrailingEdge::open;
         return make_section(naca_outline(c.geometry.naca, te), c.geometry.name);
     }
-    return make_section(read_coordinate_file(c.geometry.coordinates), c.geometry.name);
+    return make_section(read_coordinate_file(c.geometry.coordinates), c.geometry.name,
+                        c.geometry.chord_line);
 }
 
 MeshBuild build_mesh(const CaseSpec& c) {
@@ -31,7 +33,11 @@ MeshBuild build_mesh(const CaseSpec& c) {
         b.grid = generate_ogrid(b.surface, b.spec);
     } else {
         b.surface = sample_surface(b.section, b.spec.around);
-        b.grid = generate_cgrid(b.surface, b.spec);
+        try {
+            b.grid = generate_cgrid(b.surface, b.spec);
+        } catch (const GridFoldError& fold) {
+            throw InputError(explain_fold(fold, b.section, b.surface, b.spec));
+        }
     }
     b.quality = assess_quality(b.grid, b.spec.max_growth);
     return b;

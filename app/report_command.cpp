@@ -78,6 +78,23 @@ ReportTable figures_table(const fs::path& dir) {
     return t;
 }
 
+/// The section's placement (section.json, written by `veer run` and `veer sweep`): its notes as
+/// paragraphs and its figures as a table; nothing when the folder has none.
+std::optional<ReportSection> placement_section(const fs::path& dir) {
+    std::error_code ec;
+    if (!fs::exists(dir / "section.json", ec)) return std::nullopt;
+    const nlohmann::json p = read_json_file(dir / "section.json");
+    ReportSection s{"Section: how the coordinates were read and placed", {}, {}, {}};
+    if (p.contains("notes"))
+        for (const auto& n : p["notes"])
+            if (n.is_string() && !n.get<std::string>().empty()) s.paragraphs.push_back(n);
+    ReportTable t{"Placement (section.json)", {{"figure", "value"}}};
+    for (const auto& [k, v] : p.items())
+        if (k != "notes") t.rows.push_back({k, json_cell(v)});
+    s.tables.push_back(t);
+    return s;
+}
+
 void add_skipped(ReportSection& s, const PictureSet& set) {
     for (const std::string& why : set.skipped) s.paragraphs.push_back("Not drawn: " + why);
 }
@@ -101,6 +118,7 @@ ReportPage sweep_page(const fs::path& dir, const SweepPlan& plan) {
     polar.pictures = sp.pictures;
     add_skipped(polar, sp);
     page.sections.push_back(polar);
+    if (auto placement = placement_section(dir)) page.sections.push_back(*placement);
     // The points worth a closer look: the one at Cl max and the highest angle.
     std::vector<const PointRecord*> closer;
     for (const PointRecord& r : p)
@@ -124,6 +142,7 @@ ReportPage run_page(const fs::path& dir) {
     ReportPage page{"Run " + dir.filename().string() + " — " + title, {}};
     ReportSection table{"Results", {}, {run_table(s)}, {}};
     page.sections.push_back(table);
+    if (auto placement = placement_section(dir)) page.sections.push_back(*placement);
     ReportSection pics{"Pictures", {}, {}, {}};
     const PictureSet set = draw_run_pictures(dir, dir, "", title);
     pics.pictures = set.pictures;

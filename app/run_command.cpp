@@ -8,9 +8,11 @@
 #include "app/commands.hpp"
 #include "app/mesh_pipeline.hpp"
 #include "app/run_report.hpp"
+#include "app/section_notes.hpp"
 #include "app/simulation.hpp"
 #include "io/case_file.hpp"
 #include "io/checkpoint.hpp"
+#include "io/json_writer.hpp"
 #include "io/output_dir.hpp"
 #include "mesh/errors.hpp"
 
@@ -79,15 +81,19 @@ int run_run_command(const RunOptions& o) {
     prepare_output_dir(out, spec.text, o.force || own_folder);
 
     StructuredGrid grid;
+    std::optional<Section> header_section;  // a restart keeps the section.json of its first run
     if (checkpoint) {
         grid = checkpoint->grid;
     } else {
         MeshBuild mesh = build_mesh(spec);
         for (const std::string& w : mesh.quality.warnings) fmt::print("mesh warning: {}\n", w);
+        write_json_file(out / "section.json", section_placement_json(mesh.section));
         grid = std::move(mesh.grid);
+        header_section = std::move(mesh.section);
     }
     fmt::print("{}: {} x {} cells, Re {:g}, alpha {:g} deg, {} {}\n", spec.geometry.name, grid.ni(),
                grid.nj(), spec.flow.reynolds, spec.flow.alpha_deg, spec.model, spec.run.mode);
+    if (header_section) print_section_notes(*header_section, 15);
     SimulationOptions options;
     options.progress = !o.quiet;
     // A time-accurate run samples the control-volume route after every step for its time

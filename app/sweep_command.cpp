@@ -10,11 +10,13 @@
 #include "app/mesh_pipeline.hpp"
 #include "app/polar_table.hpp"
 #include "app/progress_line.hpp"
+#include "app/section_notes.hpp"
 #include "app/sweep_angles.hpp"
 #include "app/sweep_plan.hpp"
 #include "app/sweep_point.hpp"
 #include "app/sweep_ranks.hpp"
 #include "io/case_file.hpp"
+#include "io/json_writer.hpp"
 #include "io/output_dir.hpp"
 #include "mesh/errors.hpp"
 
@@ -151,6 +153,8 @@ int run_sweep(const SweepOptions& o, const SweepRanks& ranks) {
         fmt::print("{}: {} x {} cells, Re {:g}, {} points on {} process{}\n", base.geometry.name,
                    mesh.grid.ni(), mesh.grid.nj(), base.flow.reynolds, angles.size(), ranks.size(),
                    ranks.size() > 1 ? "es" : "");
+        print_section_notes(mesh.section, 15);
+        write_json_file(o.out_dir / "section.json", section_placement_json(mesh.section));
     }
     const BlockResult mine = run_block(o, sweep, angles, mine_points, mesh.grid);
     const bool interrupted = ranks.any(mine.interrupted);

@@ -147,7 +147,9 @@ void read_geometry(const toml::table* t, const std::string& source, const fs_pat
     const auto te = r.text("trailing_edge", {"open", "closed"}, "\"open\" or \"closed\"");
     const auto circle = r.flag("circle", "true (a circular cylinder of diameter 1)");
     const auto name = r.text("name", {}, "a label");
-    r.reject_unknown("naca, coordinates, circle, trailing_edge, name");
+    const auto chord = r.text("chord_line", {"auto", "file-axes", "nose-to-tail"},
+                              "\"auto\", \"file-axes\" or \"nose-to-tail\"");
+    r.reject_unknown("naca, coordinates, circle, trailing_edge, chord_line, name");
     if (circle && !*circle)
         r.fail(*t->get("circle"), "circle", "false",
                "true, or leave the key out and give naca or coordinates");
@@ -159,6 +161,10 @@ void read_geometry(const toml::table* t, const std::string& source, const fs_pat
         if (te)
             r.fail(*t->get("trailing_edge"), "trailing_edge", "\"" + *te + "\"",
                    "no trailing_edge with circle = true (a circle has none)");
+        if (chord)
+            r.fail(*t->get("chord_line"), "chord_line", "\"" + *chord + "\"",
+                   "no chord_line with circle = true (the diameter along the free stream is the "
+                   "reference line)");
         c.geometry.circle = true;
         c.geometry.name = name ? *name : "circle";
         return;
@@ -184,6 +190,11 @@ void read_geometry(const toml::table* t, const std::string& source, const fs_pat
                "trailing_edge only with naca (a coordinate file's trailing edge is closed by "
                "veer)");
     c.geometry.closed_trailing_edge = te && *te == "closed";
+    if (chord && naca)
+        r.fail(*t->get("chord_line"), "chord_line", "\"" + *chord + "\"",
+               "chord_line only with coordinates (a NACA section keeps its analytic chord line)");
+    if (chord && *chord == "file-axes") c.geometry.chord_line = ChordLineChoice::file_axes;
+    if (chord && *chord == "nose-to-tail") c.geometry.chord_line = ChordLineChoice::nose_to_tail;
     c.geometry.name = name ? *name : (naca ? "NACA " + *naca : p_stem(c.geometry.coordinates));
 }
 

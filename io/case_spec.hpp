@@ -6,6 +6,7 @@
 #include <vector>
 
 #include "mesh/cgrid_spec.hpp"
+#include "mesh/section.hpp"
 #include "solver/flow_fields.hpp"
 
 namespace veer {
@@ -18,6 +19,8 @@ struct GeometrySpec {
     /// A circular cylinder of diameter 1, meshed as an O-grid; the diameter is the reference
     /// length in place of the chord (Reynolds number, coefficients, distances).
     bool circle = false;
+    /// Coordinate files only: which line is the chord line (mesh/section.hpp).
+    ChordLineChoice chord_line = ChordLineChoice::automatic;
     std::string name;  ///< label for reports
 };
 

@@ -14,8 +14,8 @@ using Run = std::vector<FilePoint>;
 
 /// Runs whose ends are this close, relative to the section's size, share that end.
 constexpr double k_shared_end = 0.05;
-/// A blank line between points closer than this (relative to the size) splits nothing.
-constexpr double k_continues = 0.25;
+/// A blank line between points closer than this many of their neighbouring steps splits nothing.
+constexpr double k_continues = 3.0;
 
 double extent(const std::vector<Run>& runs) {
     double x0 = HUGE_VAL, x1 = -HUGE_VAL, y0 = HUGE_VAL, y1 = -HUGE_VAL;
@@ -60,13 +60,21 @@ std::optional<std::pair<std::size_t, std::size_t>> count_line(const FileBlocks& 
     return std::nullopt;
 }
 
-/// Joins blocks that continue one another into runs.
+double widest_step(const Run& r) {
+    double widest = 0.0;
+    for (std::size_t k = 1; k < r.size(); ++k)
+        widest = std::max(widest, norm(r[k].point - r[k - 1].point));
+    return widest;
+}
+
+/// Joins blocks that continue one another into runs: a blank line where the next point lies no
+/// farther than a few of the neighbouring steps separates nothing.
 std::vector<Run> runs_of(const std::vector<Run>& blocks) {
-    const double size = extent(blocks);
     std::vector<Run> runs{blocks.front()};
     for (std::size_t k = 1; k < blocks.size(); ++k) {
         const double jump = norm(blocks[k].front().point - runs.back().back().point);
-        if (jump <= k_continues * size) {
+        const double step = std::max(widest_step(runs.back()), widest_step(blocks[k]));
+        if (jump <= k_continues * step) {
             runs.back().insert(runs.back().end(), blocks[k].begin(), blocks[k].end());
         } else {
             runs.push_back(blocks[k]);
@@ -118,6 +126,19 @@ RawOutline join_surfaces(Run a, Run b, const std::string& source, double size, s
     return raw;
 }
 
+/// Whether the ends of two runs of at least two points each lie together (a shared leading edge).
+bool share_an_end(const Run& a, const Run& b) {
+    if (a.size() < 2 || b.size() < 2) return false;
+    const double size = extent({a, b});
+    return norm(a.front().point - b.front().point) <= k_shared_end * size ||
+           norm(a.back().point - b.back().point) <= k_shared_end * size;
+}
+
+/// Whether a run comes back to where it started (a loop, whatever blank lines it holds).
+bool closes(const Run& r) {
+    return norm(r.front().point - r.back().point) <= k_shared_end * extent({r});
+}
+
 /// One run that starts at its foremost point and does not come back there: two surfaces from
 /// the leading edge written one after the other with nothing between them.
 void refuse_surfaces_run_together(const Run& r, const std::string& source) {
@@ -147,24 +168,28 @@ RawOutline assemble_outline(const FileBlocks& b) {
         blocks = {Run(all.begin(), split), Run(split, all.end())};
     }
     std::vector<Run> runs = counted.empty() ? runs_of(blocks) : blocks;
-    RawOutline raw;
-    if (runs.size() == 1) {
-        refuse_surfaces_run_together(runs.front(), b.source);
-        for (const FilePoint& p : runs.front()) {
-            raw.points.push_back(p.point);
-            raw.lines.push_back(p.line);
-        }
-        raw.layout = "one closed loop";
-    } else if (runs.size() == 2) {
+    if (runs.size() == 2 && (!counted.empty() || share_an_end(runs[0], runs[1]))) {
         std::string how;
-        raw = join_surfaces(runs[0], runs[1], b.source, extent(runs), how);
+        RawOutline raw = join_surfaces(runs[0], runs[1], b.source, extent(runs), how);
         raw.layout = "two surfaces, " + how + counted;
-    } else {
+        raw.source = b.source;
+        return raw;
+    }
+    Run all;
+    for (const Run& r : runs) all.insert(all.end(), r.begin(), r.end());
+    if (runs.size() > 1 && !closes(all)) {
         std::string parts;
         for (const Run& r : runs) parts += (parts.empty() ? "" : ", ") + lines_of(r);
         throw InputError(fmt::format("{}: {} separate runs of points ({}): {}", b.source,
                                      runs.size(), parts, k_layouts_read));
     }
+    refuse_surfaces_run_together(all, b.source);
+    RawOutline raw;
+    for (const FilePoint& p : all) {
+        raw.points.push_back(p.point);
+        raw.lines.push_back(p.line);
+    }
+    raw.layout = "one closed loop";
     raw.source = b.source;
     return raw;
 }

@@ -29,8 +29,8 @@ inline constexpr const char* k_layouts_read =
 /// Recognises the layout of `b` and returns the outline, starting at a trailing edge, with
 /// `layout` describing what was found. A first block of one point with two whole numbers that
 /// match the sizes of what follows is a count line. Blocks that continue one another (the
-/// next starts within a quarter of the section's size of where the last ended) are one run of
-/// points; two runs that share an end are two surfaces (a repeated shared leading-edge point is
+/// next starts within three of the neighbouring steps of where the last ended) are one run of
+/// points, and so are blocks that together close on themselves; two runs that share an end are two surfaces (a repeated shared leading-edge point is
 /// kept once). Throws InputError naming the file and lines for anything else.
 RawOutline assemble_outline(const FileBlocks& b);
 

@@ -99,7 +99,11 @@ StructuredGrid generate_cgrid(const std::vector<Vec2>& surface, const CGridSpec&
     MarchPlan plan{spec.wake, spec.around,
                    geometric_steps(spec.first_cell, spec.far_field, spec.normal)};
     const MarchOutcome outcome = march_layers(grid, plan);
-    if (outcome.folded) throw InputError(describe_fold(outcome, spec));
+    if (outcome.folded) {
+        double reached = 0.0;
+        for (int j = 0; j <= outcome.j; ++j) reached += plan.steps[static_cast<std::size_t>(j)];
+        throw GridFoldError(describe_fold(outcome, spec), outcome, reached);
+    }
     open_wake_spacing(grid, spec.wake, spec.first_cell, spec.wake_aspect);
     fill_segments(grid, spec.wake, spec.around);
     return grid;

@@ -3,10 +3,22 @@
 #include <vector>
 
 #include "mesh/cgrid_spec.hpp"
+#include "mesh/errors.hpp"
+#include "mesh/normal_marching.hpp"
 #include "mesh/structured_grid.hpp"
 #include "mesh/vec2.hpp"
 
 namespace veer {
+
+/// The layers of a C-grid folded: where, and how far from the wall (its message names where
+/// and the generic remedies; fold_diagnosis.hpp explains it from the outline).
+class GridFoldError : public InputError {
+public:
+    GridFoldError(const std::string& message, MarchOutcome fold_at, double reached)
+        : InputError(message), fold(fold_at), distance(reached) {}
+    MarchOutcome fold;
+    double distance = 0.0;  ///< distance of the folded layer's outer edge from the wall, chords
+};
 
 /// The C-grid of `spec.around` x `spec.normal` surface cells plus `spec.wake` wake cells each side
 /// (ni = 2 * wake + around, nj = normal), chord units. `surface` holds around + 1 nodes from the
@@ -18,8 +30,8 @@ namespace veer {
 /// i and node ni - i coincide exactly for i <= wake). Every j line has the steps first_cell * r^j,
 /// r = normal_growth_ratio(spec), so its length is far_field. Segments: j_min "wake_cut_lower",
 /// "wall", "wake_cut_upper"; i_min "outflow_lower"; i_max "outflow_upper"; j_max "far_field".
-/// Throws InputError for a spec value out of range (naming the key) or when the layers would
-/// fold (naming where, and what to change).
+/// Throws InputError for a spec value out of range (naming the key), GridFoldError when the
+/// layers would fold (naming where, and what to change).
 StructuredGrid generate_cgrid(const std::vector<Vec2>& surface, const CGridSpec& spec);
 
 /// The wall-normal growth ratio r with first_cell * (1 + r + ... + r^(normal-1)) = far_field.

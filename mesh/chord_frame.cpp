@@ -89,6 +89,8 @@ SectionFrame choose_frame(OutlineWork& w, ChordLineChoice choice, const std::str
     VEER_VERIFY(w.points.size() >= 3, "an outline to place");
     SectionFrame f;
     f.choice = choice;
+    f.found_trailing_edge = te_centre(w.points);
+    f.found_foremost = w.points[foremost(w.points)];
     const bool keep_axes = choice == ChordLineChoice::file_axes ||
                            (choice == ChordLineChoice::automatic &&
                             in_chord_units(w.points, ChordFrameLimits::automatic_fit));

@@ -29,6 +29,10 @@ struct SectionFrame {
     /// Rotation applied to the source, degrees, counter-clockwise positive: +3 means the source's
     /// chord line pointed 3 degrees nose-up (trailing edge low) and was turned level.
     double rotation_deg = 0.0;
+    /// What was measured on the source (source units): the trailing-edge centre and the
+    /// foremost point (least x), on which the automatic choice decides.
+    Vec2 found_trailing_edge{1.0, 0.0};
+    Vec2 found_foremost{0.0, 0.0};
 };
 
 /// How the trailing edge of the source became the sharp edge a C-grid needs.

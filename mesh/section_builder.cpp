@@ -45,6 +45,8 @@ Section make_section(const RawOutline& raw, const std::string& name, ChordLineCh
     if (hint) {  // a generator's own chord line: nothing moves
         w.nose = *hint;
         section.frame.choice = chord_line;
+        section.frame.found_trailing_edge = 0.5 * (w.points.front() + w.points.back());
+        section.frame.found_foremost = w.points[w.nose];
     } else {
         const int set_aside = set_aside_base_points(w, outline_size(w.points));
         check_smoothness(raw, w);

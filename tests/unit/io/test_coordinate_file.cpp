@@ -55,6 +55,8 @@ TEST(CoordinateFile, ReadsTitleCommentsBlanksAndSeparators) {
     EXPECT_EQ(raw.points[3].y, -0.04);
     EXPECT_EQ(raw.points[4].x, 1.0);
     EXPECT_FALSE(raw.leading_edge.has_value());
+    // the blank line inside a loop that closes on itself separates nothing
+    EXPECT_EQ(raw.layout, "one closed loop");
 }
 
 TEST(CoordinateFile, MissingFileCannotBeOpened) {
@@ -123,7 +125,7 @@ TEST(CoordinateFile, ErrorsOfTheOutlineNameTheFileLine) {
 TEST(CoordinateFile, ImportedBluntSectionIsClosed) {
     // a 2412 written upper surface first, open trailing edge, 6 decimals, with a title: it is
     // read, reordered and closed, not refused. Gap 0.00252 (Abbott & von Doenhoff 1959 [T]);
-    // 6-decimal rounding and the chord of the farthest-point leading edge: tolerance 2e-5.
+    // 6-decimal rounding: tolerance 2e-5.
     RawOutline naca = naca_outline("2412", TrailingEdge::open, 81);
     std::string text = "survey drone wing section (NACA 2412)\n";
     for (auto it = naca.points.rbegin(); it != naca.points.rend(); ++it) {
@@ -134,8 +136,12 @@ TEST(CoordinateFile, ImportedBluntSectionIsClosed) {
     const auto path = write_file("drone_2412.dat", text);
     const Section s = make_section(read_coordinate_file(path), "drone");
     EXPECT_NEAR(s.closure.gap, 0.00252, 2e-5);
-    EXPECT_EQ(s.points.front().x, 1.0);
-    EXPECT_EQ(s.points.back().x, 1.0);
+    // in chord units: the file's axes are kept, the base stays at x = 1 and the tip of the wedge
+    // that closes it lies behind
+    EXPECT_EQ(s.frame.origin, SectionFrame::Origin::file_axes);
+    EXPECT_EQ(s.closure.form, TrailingEdgeClosure::Form::wedge);
+    EXPECT_EQ(s.points.front().x, s.points.back().x);
+    EXPECT_GT(s.points.front().x, 1.005);
     EXPECT_EQ(s.points[s.leading_edge].x, 0.0);
     EXPECT_LT(s.points[s.leading_edge / 2].y, 0.0);                   // lower surface first
     EXPECT_GT(s.points[s.leading_edge + s.leading_edge / 2].y, 0.0);  // then the upper

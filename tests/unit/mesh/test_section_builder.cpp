@@ -46,6 +46,9 @@ TEST(SectionBuilder, SharpSectionIsNormalisedAndOrdered) {
     ASSERT_EQ(s.points.size(), 321u);  // a sharp source gains no points
     EXPECT_EQ(s.leading_edge, 160u);
     EXPECT_EQ(s.closure.gap, 0.0);
+    EXPECT_EQ(s.closure.form, TrailingEdgeClosure::Form::sharp);
+    EXPECT_EQ(s.frame.origin, SectionFrame::Origin::analytic);  // the formula's own chord line
+    EXPECT_EQ(s.frame.rotation_deg, 0.0);
     EXPECT_EQ(s.points.front().x, 1.0);
     EXPECT_EQ(s.points.front().y, 0.0);
     EXPECT_EQ(s.points.back().x, 1.0);
@@ -79,25 +82,51 @@ TEST(SectionBuilder, EitherOrderingGivesTheSameSection) {
     EXPECT_LT(max_distance(c, make_section(hinted, "d")), 1e-15);
 }
 
-TEST(SectionBuilder, LeadingEdgeFoundWithoutAHint) {
-    // symmetric: the farthest point from the trailing edge is the nose, so hint or no hint the
-    // Section is the same, bit for bit
+TEST(SectionBuilder, TableInChordUnitsKeepsItsAxes) {
+    // symmetric: the foremost point is the nose, so hint or no hint the Section is the same, bit
+    // for bit
     const Section hinted = make_section(naca_outline("0012", TrailingEdge::open), "h");
     const Section found = make_section(as_file(naca_outline("0012", TrailingEdge::open)), "f");
     EXPECT_EQ(found.leading_edge, hinted.leading_edge);
     EXPECT_EQ(max_distance(found, hinted), 0.0);
-    // cambered: the farthest point lies a little off the formula's nose (common practice
-    // definition); it must still be near the nose and on the outline's smooth nose region
-    const Section cambered = make_section(as_file(naca_outline("4412", TrailingEdge::open)), "c");
-    EXPECT_EQ(cambered.points[cambered.leading_edge].x, 0.0);
-    EXPECT_EQ(cambered.points[cambered.leading_edge].y, 0.0);
-    for (const Vec2& p : cambered.points) EXPECT_GE(p.x, -1e-12);  // nothing ahead of the LE
+    // cambered: the table is in chord units, so its own axes are the chord line and nothing moves
+    // (the point farthest from the trailing edge lies a little off the formula's nose and would
+    // turn the section if it defined the chord line)
+    const RawOutline raw = as_file(naca_outline("4412", TrailingEdge::open));
+    const Section cambered = make_section(raw, "c");
+    EXPECT_EQ(cambered.frame.origin, SectionFrame::Origin::file_axes);
+    EXPECT_EQ(cambered.frame.scale, 1.0);
+    EXPECT_EQ(cambered.frame.rotation_deg, 0.0);
+    const Section analytic = make_section(naca_outline("4412", TrailingEdge::open), "a");
+    EXPECT_EQ(max_distance(cambered, analytic), 0.0);
+    // every point of the table is in the section as it was, between the added tips
+    ASSERT_EQ(cambered.points.size(), raw.points.size() + 2);
+    for (std::size_t k = 0; k < raw.points.size(); ++k) {
+        const Vec2 p = raw.points[k];  // the generator runs lower surface first, as a Section
+        EXPECT_EQ(cambered.points[k + 1].x, p.x) << k;
+        EXPECT_EQ(cambered.points[k + 1].y, p.y) << k;
+    }
+    // the foremost point of the formula's outline is a little ahead of (0, 0) on the upper side
+    EXPECT_LT(cambered.points[cambered.leading_edge].x, 0.0);
+    EXPECT_GT(cambered.points[cambered.leading_edge].y, 0.0);
+}
+
+TEST(SectionBuilder, NoseToTailChordLineTurnsACamberedTable) {
+    // asked for, the line from the farthest point to the trailing-edge centre is used: on a 4412
+    // that point lies off the formula's nose, so the section turns a little, and says by how much
+    const RawOutline raw = as_file(naca_outline("4412", TrailingEdge::open, 81));
+    const Section s = make_section(raw, "c", ChordLineChoice::nose_to_tail);
+    EXPECT_EQ(s.frame.origin, SectionFrame::Origin::nose_to_tail);
+    EXPECT_GT(std::abs(s.frame.rotation_deg), 0.01);
+    EXPECT_LT(std::abs(s.frame.rotation_deg), 0.5);
+    EXPECT_EQ(s.points[s.leading_edge].x, 0.0);
+    EXPECT_EQ(s.points[s.leading_edge].y, 0.0);
 }
 
 TEST(SectionBuilder, InvariantUnderRotationScaleAndShift) {
-    // a file in other units and attitude (chord 250 mm, pitched 12 deg, offset) gives the same
-    // Section: the leading edge is found geometrically. Round-off of the transforms and of the
-    // Newton refinement of the leading edge: 1e-9.
+    // a file in other units and attitude (chord 250 mm, pitched 12 deg, offset) is placed by
+    // veer (it is not in chord units) and gives the same Section as the unmoved table placed the
+    // same way. Round-off of the transforms and of the Newton refinement of the nose: 1e-9.
     const RawOutline raw = as_file(naca_outline("2412", TrailingEdge::open, 121));
     RawOutline moved = raw;
     const double a = 12.0 * std::numbers::pi / 180.0;
@@ -105,51 +134,59 @@ TEST(SectionBuilder, InvariantUnderRotationScaleAndShift) {
         p = {250.0 * (std::cos(a) * p.x - std::sin(a) * p.y) + 40.0,
              250.0 * (std::sin(a) * p.x + std::cos(a) * p.y) - 7.0};
     }
-    const Section s0 = make_section(raw, "a");
+    const Section s0 = make_section(raw, "a", ChordLineChoice::nose_to_tail);
     const Section s1 = make_section(moved, "b");
+    EXPECT_EQ(s1.frame.origin, SectionFrame::Origin::nose_to_tail);
     EXPECT_EQ(s0.leading_edge, s1.leading_edge);
     EXPECT_LT(max_distance(s0, s1), 1e-9);
     EXPECT_NEAR(s0.closure.gap, s1.closure.gap, 1e-12);
+    // the file was turned 12 deg counter-clockwise (nose-down): veer turned it back by -12 deg
+    EXPECT_NEAR(s1.frame.rotation_deg, s0.frame.rotation_deg - 12.0, 1e-9);
+    EXPECT_NEAR(s1.frame.scale, s0.frame.scale / 250.0, 1e-15);
+}
+
+TEST(SectionBuilder, FileAxesAskedOfAFileNotInChordUnitsIsRefused) {
+    RawOutline raw = as_file(naca_outline("0012", TrailingEdge::open, 61));
+    for (Vec2& p : raw.points) p = 0.25 * p;  // chord 0.25: written in metres
+    raw.source = "metres.dat";
+    std::string e;
+    try {
+        make_section(raw, "m", ChordLineChoice::file_axes);
+    } catch (const InputError& error) {
+        e = error.what();
+    }
+    expect_contains(e, "metres.dat: chord_line = \"file-axes\" needs coordinates in chords");
+    expect_contains(e, "the trailing-edge centre is at (0.25, 0)");
+    // automatic places it instead: scale 4, no rotation (a symmetric section)
+    const Section s = make_section(raw, "m");
+    EXPECT_EQ(s.frame.origin, SectionFrame::Origin::nose_to_tail);
+    EXPECT_NEAR(s.frame.scale, 4.0, 1e-12);
+    EXPECT_EQ(s.frame.rotation_deg, 0.0);
 }
 
 TEST(SectionBuilder, BluntTrailingEdgeIsClosedWithAWedge) {
     // open 0012: gap 0.00252 chord (Abbott & von Doenhoff 1959 [T]); the surfaces' last segments
-    // meet about 0.009 chord behind the base (half-angle 8 deg), well within the allowed reach.
+    // meet about 0.009 chord behind the base (half-angle 8 deg), well within the wedge's reach.
+    // The chord stays the formula's: the base sits at x = 1 and the tip behind it.
     const Section s = make_section(naca_outline("0012", TrailingEdge::open), "blunt");
     ASSERT_EQ(s.points.size(), 323u);  // the tip is added first and last
+    EXPECT_EQ(s.closure.form, TrailingEdgeClosure::Form::wedge);
     EXPECT_NEAR(s.closure.gap, 0.00252, 5e-6);
-    EXPECT_EQ(s.points.front().x, 1.0);
+    EXPECT_EQ(s.points.front().x, s.points.back().x);
+    EXPECT_EQ(s.points.front().y, 0.0);
     EXPECT_EQ(s.points.back().y, 0.0);
+    EXPECT_NEAR(s.points.front().x, 1.0 + s.closure.length, 1e-15);
+    EXPECT_GT(s.closure.length, 0.007);
+    EXPECT_LT(s.closure.length, 0.011);
     const Vec2 lower_base = s.points[1], upper_base = s.points[s.points.size() - 2];
-    EXPECT_NEAR(lower_base.x, upper_base.x, 1e-15);
-    EXPECT_NEAR(lower_base.y, -upper_base.y, 1e-15);
-    EXPECT_GT(lower_base.x, 0.985);
-    EXPECT_LT(lower_base.x, 0.995);
+    EXPECT_EQ(lower_base.x, 1.0);
+    EXPECT_EQ(upper_base.x, 1.0);
+    EXPECT_EQ(lower_base.y, -upper_base.y);
     // the wedge continues the surface directions: the angle between the base-to-tip segment and
     // the last surface segment is round-off small
     const Vec2 last = lower_base - s.points[2];
     const Vec2 wedge = s.points[0] - lower_base;
     EXPECT_NEAR(cross(last, wedge) / (norm(last) * norm(wedge)), 0.0, 1e-9);
-}
-
-TEST(SectionBuilder, ThickBaseIsClosedDownstreamOfItsMidpoint) {
-    // 0012 cut at x = 0.9: base 2 y_t(0.9) = 0.029 thick, surfaces converging at 7 deg would meet
-    // 0.12 chord behind, beyond the 0.02 reach: the tip goes one base height behind the base
-    // midpoint. Round-off of the normalisation: 1e-12.
-    RawOutline raw = naca_outline("0012", TrailingEdge::open, 161);
-    std::vector<Vec2> cut;
-    for (const Vec2& p : raw.points) {
-        if (p.x <= 0.9) cut.push_back(p);
-    }
-    raw.points = cut;
-    raw.leading_edge.reset();
-    const double base = norm(cut.back() - cut.front());
-    const double chord0 = 0.5 * (cut.front().x + cut.back().x);
-    const Section s = make_section(raw, "cut");
-    EXPECT_NEAR(s.closure.gap, base / chord0, 1e-12);
-    const double scale = 1.0 / (chord0 + base);
-    EXPECT_NEAR(s.points[1].x, chord0 * scale, 1e-12);
-    EXPECT_NEAR(s.points[1].y, -0.5 * base * scale, 1e-12);
 }
 
 TEST(SectionBuilder, TooFewPointsAreRefused) {
@@ -167,7 +204,9 @@ TEST(SectionBuilder, RepeatedPointIsRefusedWithItsLine) {
         raw.lines.push_back(static_cast<int>(k) + 2);
     const std::string e = error_of(raw);
     expect_contains(e, "repeat.dat:33:");  // point index 31, one title line before the first
-    expect_contains(e, "repeats the previous one");
+    expect_contains(e, "repeats the previous one (line 32 (");
+    expect_contains(e, "a duplicated station");
+    expect_contains(e, "neighbours: line 31 (");
     // generated outlines name the point instead
     raw.lines.clear();
     expect_contains(error_of(raw), "repeat.dat (point 32)");
@@ -209,14 +248,32 @@ TEST(SectionBuilder, CrossingIsFoundInALargeOutline) {
     expect_contains(error_of(raw), "dented.dat: the outline crosses itself");
 }
 
-TEST(SectionBuilder, SharpReversalIsRefused) {
-    // a spike: one lower-surface point thrown back upstream makes the outline double back
+TEST(SectionBuilder, PointThrownBackIsNamedAsOutOfPlace) {
+    // one lower-surface point thrown back upstream: the outline runs back to it and turns again;
+    // leaving that point out mends it, so it is the one named (point 21, 1-based)
     RawOutline raw = as_file(naca_outline("0012", TrailingEdge::open, 61));
     raw.points[20] = raw.points[19] + 3.0 * (raw.points[18] - raw.points[19]);
-    raw.source = "spike.dat";
+    raw.source = "thrown.dat";
     const std::string e = error_of(raw);
-    expect_contains(e, "spike.dat (point 20): the outline doubles back on itself");
+    expect_contains(e, "thrown.dat (point 21): point (");
+    expect_contains(e, "is out of place");
     expect_contains(e, "at most 150 allowed");
+    expect_contains(e, "neighbours: point 20 (");
+}
+
+TEST(SectionBuilder, PairInReverseOrderIsNamed) {
+    // two stations of the lower surface swapped (a reversed step): swapping them back mends it
+    RawOutline raw = as_file(naca_outline("0012", TrailingEdge::open, 61));
+    std::swap(raw.points[30], raw.points[31]);
+    raw.source = "swapped.dat";
+    for (std::size_t k = 0; k < raw.points.size(); ++k)
+        raw.lines.push_back(static_cast<int>(k) + 3);  // two header lines
+    const std::string e = error_of(raw);
+    expect_contains(e, "swapped.dat:33: line 33 (");
+    expect_contains(e, "and line 34 (");
+    expect_contains(e, "are in reverse order");
+    expect_contains(e, "neighbours: line 32 (");
+    expect_contains(e, "line 35 (");
 }
 
 TEST(SectionBuilder, ErrorsAreOneLine) {

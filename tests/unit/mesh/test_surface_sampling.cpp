@@ -30,7 +30,7 @@ double worst_neighbour_ratio(const std::vector<Vec2>& n) {
 
 TEST(SurfaceSampling, NodeCountAndFixedNodes) {
     for (int around : {8, 64, 256, 400}) {
-        const Section s = naca("4412", TrailingEdge::open);
+        const Section s = naca("4412", TrailingEdge::closed);
         const std::vector<Vec2> n = sample_surface(s, around);
         ASSERT_EQ(n.size(), static_cast<std::size_t>(around) + 1);
         EXPECT_EQ(n.front().x, 1.0);
@@ -43,6 +43,13 @@ TEST(SurfaceSampling, NodeCountAndFixedNodes) {
         // lower surface first: the node a quarter of the way round is below the one three quarters
         EXPECT_LT(n[static_cast<std::size_t>(around / 4)].y,
                   n[static_cast<std::size_t>(3 * around / 4)].y);
+        // a blunt source: the first and last nodes are the tip of its closure, behind x = 1
+        const Section blunt = naca("4412", TrailingEdge::open);
+        const std::vector<Vec2> b = sample_surface(blunt, around);
+        EXPECT_EQ(b.front().x, blunt.points.front().x);
+        EXPECT_EQ(b.front().y, blunt.points.front().y);
+        EXPECT_EQ(b.back().x, b.front().x);
+        EXPECT_GT(b.front().x, 1.0);
     }
 }
 
