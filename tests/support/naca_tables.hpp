@@ -3,7 +3,8 @@
 /// chosen stations, rounded ordinates, a title line, either layout. Written here from the
 /// published formula, independently of mesh/naca.cpp, so that a table and veer's analytic section
 /// are two routes to the same shape:
-///   thickness  y_t = 5t[0.2969 sqrt(x) - 0.1260x - 0.3516x^2 + 0.2843x^3 - 0.1015x^4],
+///   thickness  y_t = 5t[0.2969 sqrt(x) - 0.1260x - 0.3516x^2 + 0.2843x^3 - 0.1015x^4]
+///              (the closed-edge variant ends in -0.1036x^4),
 ///   camber     y_c = m/p^2 (2px - x^2) for x <= p, m/(1-p)^2 [(1 - 2p) + 2px - x^2] beyond,
 ///   surface    x = x_c -+ y_t sin(theta), y = y_c +- y_t cos(theta), theta = atan(dy_c/dx)
 /// (Abbott & von Doenhoff 1959, Theory of Wing Sections, section 6.4; Jacobs, Ward & Pinkerton
@@ -21,15 +22,16 @@
 namespace veer::test {
 
 struct NacaDigits {
-    double m = 0.0;   ///< maximum camber, chords
-    double p = 0.4;   ///< its position, chords
-    double t = 0.12;  ///< thickness, chords
+    double m = 0.0;         ///< maximum camber, chords
+    double p = 0.4;         ///< its position, chords
+    double t = 0.12;        ///< thickness, chords
+    double last = -0.1015;  ///< last thickness coefficient: -0.1036 closes the trailing edge
 };
 
 inline Vec2 naca_point(const NacaDigits& d, double x, bool upper) {
     const double yt = 5.0 * d.t *
-                      (0.2969 * std::sqrt(x) - 0.1260 * x - 0.3516 * x * x + 0.2843 * x * x * x -
-                       0.1015 * x * x * x * x);
+                      (0.2969 * std::sqrt(x) - 0.1260 * x - 0.3516 * x * x + 0.2843 * x * x * x +
+                       d.last * x * x * x * x);
     double yc = 0.0, slope = 0.0;
     if (d.m > 0.0 && x < d.p) {
         yc = d.m / (d.p * d.p) * (2.0 * d.p * x - x * x);
