@@ -37,7 +37,11 @@ Section make_section(const RawOutline& raw, const std::string& name, ChordLineCh
     Section section;
     section.name = name;
     section.layout = raw.layout;
-    if (twice_signed_area(w.points) > 0.0) {  // counter-clockwise: upper surface first
+    const bool upper_first = twice_signed_area(w.points) > 0.0;  // counter-clockwise
+    if (!raw.layout.empty())
+        section.layout =
+            raw.layout + (upper_first ? ", upper surface first" : ", lower surface first");
+    if (upper_first) {
         std::reverse(w.points.begin(), w.points.end());
         std::reverse(w.source.begin(), w.source.end());
         if (hint) hint = w.points.size() - 1 - *hint;

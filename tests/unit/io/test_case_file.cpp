@@ -115,6 +115,39 @@ TEST(CaseFile, CoordinatePathsAreRelativeToTheCaseFile) {
     }
 }
 
+TEST(CaseFile, ChordLineKeyChoosesTheConventionForCoordinateFiles) {
+    const auto dir = std::filesystem::temp_directory_path() / "veer_case_chord_line";
+    std::filesystem::create_directories(dir);
+    std::ofstream(dir / "section.dat") << "1 0\n0 0\n";
+    const std::string head = "[geometry]\ncoordinates = \"section.dat\"\n";
+    const std::string flow = "[flow]\nreynolds = 1e4\n";
+    const auto parse = [&](const std::string& line) {
+        return parse_case_text(head + line + flow, "c.toml", dir);
+    };
+    EXPECT_EQ(parse("").geometry.chord_line, ChordLineChoice::automatic);
+    EXPECT_EQ(parse("chord_line = \"auto\"\n").geometry.chord_line, ChordLineChoice::automatic);
+    EXPECT_EQ(parse("chord_line = \"file-axes\"\n").geometry.chord_line,
+              ChordLineChoice::file_axes);
+    EXPECT_EQ(parse("chord_line = \"nose-to-tail\"\n").geometry.chord_line,
+              ChordLineChoice::nose_to_tail);
+    try {
+        parse("chord_line = \"leading-edge\"\n");
+        FAIL() << "an unknown chord_line was accepted";
+    } catch (const InputError& e) {
+        EXPECT_NE(std::string(e.what()).find("c.toml:3: [geometry] chord_line = \"leading-edge\": "
+                                             "expected \"auto\", \"file-axes\" or "
+                                             "\"nose-to-tail\""),
+                  std::string::npos)
+            << e.what();
+    }
+    std::string naca = minimal_case;
+    naca.insert(naca.find("[mesh]"), "chord_line = \"file-axes\"\n");
+    EXPECT_NE(error_of(naca).find("chord_line only with coordinates (a NACA section keeps its "
+                                  "analytic chord line)"),
+              std::string::npos)
+        << error_of(naca);
+}
+
 TEST(CaseFile, CommandLineOverridesReplaceValues) {
     const CaseSpec c =
         parse_case_text(minimal_case, "case.toml", ".", {"flow.alpha=-6", "run.mode=unsteady"});
