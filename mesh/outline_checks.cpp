@@ -44,8 +44,7 @@ double segment_distance(Vec2 a, Vec2 b, Vec2 c, Vec2 d) {
                      point_segment_distance(c, a, b), point_segment_distance(d, a, b)});
 }
 
-std::string segment_name(const RawOutline& raw, std::size_t k) {
-    const std::size_t next = (k + 1) % raw.points.size();
+std::string segment_name(const RawOutline& raw, std::size_t k, std::size_t next) {
     if (!raw.lines.empty()) {
         return "the segment between lines " + std::to_string(raw.lines[k]) + " and " +
                std::to_string(raw.lines[next]);
@@ -54,9 +53,11 @@ std::string segment_name(const RawOutline& raw, std::size_t k) {
            std::to_string(next + 1);
 }
 
+/// A repeat of the first or last point (a closing point written twice) is left to
+/// set_aside_base_points; any other is an error.
 void check_repeats(const RawOutline& raw, double size) {
     const auto& p = raw.points;
-    for (std::size_t k = 1; k < p.size(); ++k) {
+    for (std::size_t k = 2; k + 1 < p.size(); ++k) {
         if (norm(p[k] - p[k - 1]) <= OutlineTolerances::duplicate_distance * size) {
             throw InputError(outline_location(raw, k) + ": point " + format_point(p[k]) +
                              " repeats the previous one (" + point_label(raw, k - 1) +
@@ -149,15 +150,22 @@ void check_reversals(const RawOutline& raw) {
 }
 
 /// All pairs of non-adjacent segments of the closed polygon (the closing segment from the last
-/// point to the first included unless they coincide), with a bounding-box prefilter: O(n^2) with
-/// a small constant, about a millisecond for 1000 points.
+/// point to the first included unless they coincide; a closing point written twice at either end
+/// left out), with a bounding-box prefilter: O(n^2) with a small constant, about a millisecond
+/// for 1000 points.
 void check_crossings(const RawOutline& raw, double size) {
-    const auto& p = raw.points;
-    const std::size_t n = p.size();
     const double tol = OutlineTolerances::crossing_distance * size;
+    const double same = OutlineTolerances::duplicate_distance * size;
+    std::size_t lo = 0, hi = raw.points.size() - 1;
+    while (lo + 1 < hi && norm(raw.points[lo + 1] - raw.points[lo]) <= same) ++lo;
+    while (hi > lo + 1 && norm(raw.points[hi - 1] - raw.points[hi]) <= same) --hi;
+    const std::vector<Vec2> p(raw.points.begin() + static_cast<std::ptrdiff_t>(lo),
+                              raw.points.begin() + static_cast<std::ptrdiff_t>(hi) + 1);
+    const std::size_t n = p.size();
     const bool closed = norm(p.back() - p.front()) <= tol;
     const std::size_t segments = closed ? n - 1 : n;  // segment k joins k and (k + 1) % n
     const auto end = [&](std::size_t k) { return p[(k + 1) % n]; };
+    const auto name = [&](std::size_t k) { return segment_name(raw, lo + k, lo + (k + 1) % n); };
     for (std::size_t a = 0; a < segments; ++a) {
         const double ax0 = std::min(p[a].x, end(a).x) - tol, ax1 = std::max(p[a].x, end(a).x) + tol;
         const double ay0 = std::min(p[a].y, end(a).y) - tol, ay1 = std::max(p[a].y, end(a).y) + tol;
@@ -166,8 +174,8 @@ void check_crossings(const RawOutline& raw, double size) {
             if (std::max(p[b].x, end(b).x) < ax0 || std::min(p[b].x, end(b).x) > ax1) continue;
             if (std::max(p[b].y, end(b).y) < ay0 || std::min(p[b].y, end(b).y) > ay1) continue;
             if (segment_distance(p[a], end(a), p[b], end(b)) <= tol) {
-                throw InputError(raw.source + ": the outline crosses itself: " +
-                                 segment_name(raw, a) + " meets " + segment_name(raw, b) +
+                throw InputError(raw.source + ": the outline crosses itself: " + name(a) +
+                                 " meets " + name(b) +
                                  " (a section outline must be one simple loop)");
             }
         }

@@ -12,8 +12,9 @@ struct OutlineTolerances {
     static constexpr std::size_t min_points = 20;
     /// First and last points at most this far apart (chords): one closed loop.
     static constexpr double max_closure_gap = 0.05;
-    /// Consecutive points closer than this (chords) count as repeated.
-    static constexpr double duplicate_distance = 1e-12;
+    /// Consecutive points closer than this (chords) count as repeated: a spline cannot tell them
+    /// apart from one point (the densest tables, 6 decimals at the nose, are 1e-5 apart).
+    static constexpr double duplicate_distance = 1e-7;
     /// Non-adjacent segments closer than this (chords) count as crossing.
     static constexpr double crossing_distance = 1e-9;
     /// A turn of more than this between consecutive segments away from the trailing edge is a

@@ -1,6 +1,7 @@
 #include "mesh/section_builder.hpp"
 
 #include <algorithm>
+#include <sstream>
 
 #include "mesh/chord_frame.hpp"
 #include "mesh/errors.hpp"
@@ -24,6 +25,19 @@ double outline_size(const std::vector<Vec2>& p) {
     double size = 0.0;
     for (const Vec2& q : p) size = std::max(size, norm(q - te));
     return size;
+}
+
+/// The gap left once the base points are set aside must be one the closure accepts.
+void check_gap(const RawOutline& raw, const OutlineWork& w) {
+    const double size = outline_size(w.points);
+    const double gap = norm(w.points.back() - w.points.front()) / size;
+    if (gap <= OutlineTolerances::max_closure_gap) return;
+    std::ostringstream out;
+    out << raw.source << ": the trailing edge is " << gap << " chords thick (between "
+        << point_label(raw, w.source.front()) << " and " << point_label(raw, w.source.back())
+        << ", the base drawn across it set aside); at most " << OutlineTolerances::max_closure_gap
+        << " allowed";
+    throw InputError(out.str());
 }
 
 }  // namespace
@@ -53,6 +67,7 @@ Section make_section(const RawOutline& raw, const std::string& name, ChordLineCh
         section.frame.found_foremost = w.points[w.nose];
     } else {
         const int set_aside = set_aside_base_points(w, outline_size(w.points));
+        if (set_aside > 0) check_gap(raw, w);
         check_smoothness(raw, w);
         section.frame = choose_frame(w, chord_line, raw.source);
         apply_frame(w, section.frame);

@@ -15,9 +15,11 @@ constexpr double radians(double deg) { return deg * std::numbers::pi / 180.0; }
 
 Vec2 unit(Vec2 v) { return (1.0 / norm(v)) * v; }
 
-/// Whether the segment a -> b is a base segment: short, and turning sharply into b -> c.
+/// Whether the segment a -> b is a base segment: short, and turning sharply into b -> c, or of
+/// no length at all (a point written twice).
 bool is_base_segment(Vec2 a, Vec2 b, Vec2 c, double chord) {
     const Vec2 base = b - a, surface = c - b;
+    if (norm(base) <= 1e-7 * chord) return true;
     const double cos_limit = std::cos(radians(Limits::base_turn_degrees));
     return norm(base) <= Limits::base_length * chord &&
            dot(base, surface) < cos_limit * norm(base) * norm(surface);
@@ -76,7 +78,7 @@ int set_aside_base_points(OutlineWork& w, double chord) {
     auto& p = w.points;
     int removed = 0;
     for (int end = 0; end < 2; ++end) {
-        for (int k = 0; k < 2 && p.size() > 4 && is_base_segment(p[0], p[1], p[2], chord); ++k) {
+        for (int k = 0; k < 3 && p.size() > 4 && is_base_segment(p[0], p[1], p[2], chord); ++k) {
             p.erase(p.begin());
             w.source.erase(w.source.begin());
             ++removed;

@@ -20,8 +20,9 @@ struct OutlineWork {
 struct TrailingEdgeLimits {
     /// A segment at either end of the outline shorter than this (chords) that turns by more
     /// than base_turn_degrees into the surface describes the base: a closing point repeated
-    /// at the end, or a segment drawn across the gap. Same limit as the largest gap accepted.
-    static constexpr double base_length = 0.05;
+    /// at the end, or a segment drawn across the gap (twice the largest gap accepted, so that a
+    /// base just too wide is set aside and then refused as a gap, not as a kink).
+    static constexpr double base_length = 0.1;
     static constexpr double base_turn_degrees = 45.0;
     /// A gap below this (chords) is a sharp edge written with rounding.
     static constexpr double sharp_gap = 1e-6;
@@ -34,8 +35,9 @@ struct TrailingEdgeLimits {
     static constexpr double fairing_half_angle_degrees = 8.0;
 };
 
-/// Sets aside the base points at both ends of `w` (see TrailingEdgeLimits::base_length) and
-/// returns how many there were. `chord` is the outline's size in its own units.
+/// Sets aside the base points at both ends of `w` (see TrailingEdgeLimits::base_length), and a
+/// point repeating its neighbour at either end, and returns how many there were. `chord` is the
+/// outline's size in its own units.
 int set_aside_base_points(OutlineWork& w, double chord);
 
 /// Closes the trailing edge of `w` (in chord units): a gap of at most sharp_gap is made exact,

@@ -47,14 +47,19 @@ std::vector<Vec2> table_4412() {
 }
 
 TEST(OutlineSmoothness, CoarseAndRoundedTablesPass) {
-    // the limits were set from these: away from the nose the worst offset is a third of the
-    // limits; at the nose a 6 % section at 61 even stations reaches 0.92 of the local spacing
-    std::vector<double> even;
+    // the limits were set from these (outline_smoothness.hpp): three stations or more from the
+    // nose the worst excess is 0.03 of the spacing (limit 0.1); nearer, 2.7 (limit 3)
+    std::vector<double> even, coarse;
     for (int k = 0; k <= 60; ++k) even.push_back(k / 60.0);
+    for (int k = 0; k <= 11; ++k) coarse.push_back(k / 11.0);
+    // (0006 at 12 even stations is left out: its nose turns by 152 degrees between two
+    // stations, and the reversal check refuses it, rightly: such a table has no nose)
     for (const test::NacaDigits& d : {k_4412, k_0012, k_6409, k_0006, k_0021}) {
         for (const auto& [stations, decimals] :
              {std::pair{test::report_stations(), 4}, std::pair{test::cosine_stations(35), 4},
-              std::pair{test::cosine_stations(161), 6}, std::pair{even, 5}}) {
+              std::pair{test::cosine_stations(161), 6}, std::pair{even, 5},
+              std::pair{test::cosine_stations(12), 5}, std::pair{coarse, 5}}) {
+            if (d.t < 0.07 && stations.size() == 12 && stations[1] > 0.09) continue;
             const RawOutline raw =
                 file_of(test::loop_of(test::naca_surfaces(d, stations)), decimals, "ok.dat");
             EXPECT_EQ(error_of(raw), "(no error)")
@@ -77,12 +82,13 @@ TEST(OutlineSmoothness, OrdinateTimesTwoAndAHalfIsNamedByLine) {
 }
 
 TEST(OutlineSmoothness, SpikesOfEverySizeAreCaughtAwayFromTheNose) {
-    // x 2.5, x 2 and x 1.1 on both surfaces from x = 0.28 to 0.98 (lower) and at mid chord
-    // (upper). Near the trailing edge a x 1.1 error of a 0.3 % ordinate is 3e-4 chords, below
-    // what rounding and coarse stations allow, and is not asked for.
+    // x 2.5 and x 2 on both surfaces from x = 0.28 to 0.98 (lower) and 0.36 to 0.95 (upper),
+    // x 1.1 and x 0.9 where the ordinate is large (upper, x = 0.36 and 0.73). A x 1.1 error of
+    // the 2.4 % lower ordinate at x = 0.28 (2.4e-3 chords) sits at the limit, and near the
+    // trailing edge one of a 0.3 % ordinate is 3e-4 chords: not asked for.
     const std::vector<std::pair<std::size_t, std::vector<double>>> cases = {
-        {5, {2.5, 2.0}},       {12, {2.5, 2.0, 1.1}}, {20, {2.5, 2.0, 1.1, 0.9}},
-        {46, {2.5, 2.0, 1.1}}, {59, {2.5, 2.0}},      {65, {2.5, 2.0}}};
+        {5, {2.5, 2.0}},  {12, {2.5, 2.0, 1.1}}, {20, {2.5, 2.0, 1.1, 0.9}},
+        {46, {2.5, 2.0}}, {59, {2.5, 2.0}},      {65, {2.5, 2.0}}};
     for (const auto& [k, factors] : cases) {
         for (double f : factors) {
             std::vector<Vec2> loop = table_4412();
@@ -90,19 +96,27 @@ TEST(OutlineSmoothness, SpikesOfEverySizeAreCaughtAwayFromTheNose) {
             const std::string e = error_of(file_of(loop, 5, "spike.dat"));
             expect_contains(e, "spike.dat:" + std::to_string(k + 2) + ": point");
             expect_contains(e, "breaks the smoothness");
+            EXPECT_NE(e, "(no error)") << "point " << k << " x " << f;
         }
     }
 }
 
-TEST(OutlineSmoothness, GrossErrorsNearTheNoseAreCaught) {
-    // within 5 % chord of the nose a coarse table is legitimately far from a smooth curve, so
-    // only errors beyond the local spacing count: x 2.5 at x = 0.0148 (upper) and 0.0234
-    // (lower), x 2 at 0.0284 (upper)
+TEST(OutlineSmoothness, ErrorsNearTheNoseAreCaught) {
+    // three stations from the nose (point 35) the ordinary limits hold: x 2.5 at x = 0.0148
+    // (upper) and 0.0234 (lower), x 2 at 0.0284 (upper)
     for (const auto& [k, f] : {std::pair{31u, 2.5}, std::pair{37u, 2.5}, std::pair{30u, 2.0}}) {
         std::vector<Vec2> loop = table_4412();
         loop[k].y *= f;
         expect_contains(error_of(file_of(loop, 5, "nose.dat")),
                         "nose.dat:" + std::to_string(k + 2) + ": point");
+    }
+    // one or two stations from it the point's own limit is 3 spacings (a coarse nose of a thin
+    // section lies up to 2.7 off), but an error there also pulls the neighbour three stations
+    // out off its curve, and the point itself is named: x 2.5 and a lost sign at x = 0.0055
+    for (const double f : {2.5, -1.0}) {
+        std::vector<Vec2> loop = table_4412();
+        loop[32].y *= f;
+        expect_contains(error_of(file_of(loop, 5, "near.dat")), "near.dat:34: point (0.00548, ");
     }
 }
 

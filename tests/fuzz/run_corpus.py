@@ -1,0 +1,82 @@
+#!/usr/bin/env python3
+"""Runs `veer check` on every case of a fuzz corpus and fails unless each one ends cleanly.
+
+    run_corpus.py --veer build/app/veer --work DIR [--seed 17 --count 240] [--jobs 2] [--timeout 5]
+
+With --seed and --count the corpus is first written into DIR by make_mutants.py. A mutant ends
+cleanly when veer exits 0 having built the grid ("valid case"), or exits 2 with one line
+"veer: error: ..." on stderr; anything else (a crash, a sanitizer report, an internal error,
+more output lines, a run longer than the timeout) is a failure, listed with its case file.
+"""
+import argparse
+import concurrent.futures
+import glob
+import os
+import subprocess
+import sys
+import time
+
+HERE = os.path.dirname(os.path.abspath(__file__))
+sys.path.insert(0, HERE)
+import make_mutants  # noqa: E402
+
+# Passive OpenMP waits set here spare veer its restart to set them (app/wait_policy.hpp).
+ENV = dict(os.environ, OMP_WAIT_POLICY=os.environ.get("OMP_WAIT_POLICY", "PASSIVE"))
+
+
+def check_one(veer, case, timeout):
+    """(case, verdict or None when clean, exit code, seconds)"""
+    start = time.monotonic()
+    try:
+        r = subprocess.run([veer, "check", case], capture_output=True, timeout=timeout, env=ENV)
+    except subprocess.TimeoutExpired:
+        return case, "no answer within %g s" % timeout, None, timeout
+    took = time.monotonic() - start
+    out = r.stdout.decode("utf-8", "replace")
+    err = r.stderr.decode("utf-8", "replace")
+    err_lines = err.splitlines()
+    if r.returncode == 0 and "valid case" in out and not err:
+        return case, None, 0, took
+    if r.returncode == 2 and len(err_lines) == 1 and err_lines[0].startswith("veer: error: "):
+        return case, None, 2, took
+    what = "exit %d" % r.returncode
+    return case, "%s; stderr: %s" % (what, " | ".join(err_lines[:3])[:400]), r.returncode, took
+
+
+def main():
+    ap = argparse.ArgumentParser(description=__doc__.split("\n")[0])
+    ap.add_argument("--veer", required=True)
+    ap.add_argument("--work", required=True)
+    ap.add_argument("--seed", type=int)
+    ap.add_argument("--count", type=int)
+    ap.add_argument("--family", default="coordinates")
+    ap.add_argument("--jobs", type=int, default=2)
+    ap.add_argument("--timeout", type=float, default=5.0)
+    a = ap.parse_args()
+    if a.seed is not None and a.count is not None:
+        for old in glob.glob(os.path.join(a.work, "mutant_*")):
+            os.remove(old)
+        sys.argv = [sys.argv[0], "--seed", str(a.seed), "--count", str(a.count), "--out", a.work,
+                    "--family", a.family]
+        make_mutants.main()
+    cases = sorted(glob.glob(os.path.join(a.work, "mutant_*.toml")))
+    if not cases or (a.count is not None and len(cases) != a.count):
+        print("fuzz: expected %s cases in %s, found %d" % (a.count, a.work, len(cases)))
+        return 1
+    start = time.monotonic()
+    with concurrent.futures.ThreadPoolExecutor(max_workers=a.jobs) as pool:
+        results = list(pool.map(lambda c: check_one(a.veer, c, a.timeout), cases))
+    bad = [r for r in results if r[1] is not None]
+    accepted = sum(1 for r in results if r[1] is None and r[2] == 0)
+    refused = sum(1 for r in results if r[1] is None and r[2] == 2)
+    slowest = max(results, key=lambda r: r[3])
+    print("fuzz: %d mutants, %d meshed, %d refused cleanly, %d failed; %.1f s in all, slowest "
+          "%.2f s (%s)" % (len(results), accepted, refused, len(bad), time.monotonic() - start,
+                           slowest[3], os.path.basename(slowest[0])))
+    for case, verdict, _, _ in bad[:20]:
+        print("  %s: %s" % (case, verdict))
+    return 1 if bad else 0
+
+
+if __name__ == "__main__":
+    sys.exit(main())
