@@ -8,6 +8,7 @@
 #include "mesh/errors.hpp"
 #include "mesh/naca.hpp"
 #include "mesh/section_builder.hpp"
+#include "tests/support/naca_tables.hpp"
 
 namespace veer {
 namespace {
@@ -109,6 +110,27 @@ TEST(SectionBuilder, TableInChordUnitsKeepsItsAxes) {
     // the foremost point of the formula's outline is a little ahead of (0, 0) on the upper side
     EXPECT_LT(cambered.points[cambered.leading_edge].x, 0.0);
     EXPECT_GT(cambered.points[cambered.leading_edge].y, 0.0);
+}
+
+TEST(SectionBuilder, DroopedNoseKeepsTheFileAxes) {
+    // a 4412 table (35 cosine stations, Abbott & von Doenhoff 1959 section 6.4 [T]) whose nose
+    // stations are shifted down, up to 1.5 % chord at the nose and fading out by x = 0.15 (a real
+    // asymmetric nose): the file's chord line stays, and nothing is turned or scaled, so the
+    // user's angle of attack is the angle of their data
+    RawOutline raw;
+    raw.source = "drooped.dat";
+    raw.points = test::loop_of(test::naca_surfaces({0.04, 0.4, 0.12}, test::cosine_stations(35)));
+    for (Vec2& p : raw.points)
+        if (p.x < 0.15) p.y -= 0.015 * std::pow(1.0 - p.x / 0.15, 2);
+    const Section s = make_section(raw, "drooped");
+    EXPECT_EQ(s.frame.origin, SectionFrame::Origin::file_axes);
+    EXPECT_EQ(s.frame.rotation_deg, 0.0);
+    EXPECT_EQ(s.frame.scale, 1.0);
+    EXPECT_NEAR(s.points[s.leading_edge].y, -0.015, 1e-12);  // the nose point, as written
+    // the line from the drooped nose to the trailing edge points nose-down: taking it as the
+    // chord line would have turned the section by -0.70 deg and changed every angle of attack
+    const Section turned = make_section(raw, "turned", ChordLineChoice::nose_to_tail);
+    EXPECT_LT(turned.frame.rotation_deg, -0.5);
 }
 
 TEST(SectionBuilder, NoseToTailChordLineTurnsACamberedTable) {
