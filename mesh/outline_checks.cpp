@@ -142,11 +142,20 @@ bool runs_on_after(const std::vector<Vec2>& p, std::size_t k, Change change) {
     throw InputError(out.str());
 }
 
-/// The trailing-edge ends are not checked.
+/// The trailing-edge ends are not checked. A loop started at the nose turns back at its sharp
+/// trailing edge, the point farthest from its start, and is named as such.
 void check_reversals(const RawOutline& raw) {
     const auto& p = raw.points;
-    for (std::size_t k = 1; k + 1 < p.size(); ++k)
-        if (doubles_back(p, k)) refuse_reversal(raw, k);
+    const std::size_t n = p.size();
+    std::size_t farthest = 0;
+    for (std::size_t k = 1; k < n; ++k)
+        if (norm(p[k] - p[0]) > norm(p[farthest] - p[0])) farthest = k;
+    const bool ends_apart = dot(p[1] - p[0], p[n - 2] - p[n - 1]) < 0.0;
+    for (std::size_t k = 1; k + 1 < n; ++k) {
+        if (!doubles_back(p, k)) continue;
+        if (ends_apart && k + 1 >= farthest && k <= farthest + 1) refuse_loop_start(raw, 0);
+        refuse_reversal(raw, k);
+    }
 }
 
 /// All pairs of non-adjacent segments of the closed polygon (the closing segment from the last
@@ -183,6 +192,14 @@ void check_crossings(const RawOutline& raw, double size) {
 }
 
 }  // namespace
+
+void refuse_loop_start(const RawOutline& raw, std::size_t first) {
+    throw InputError(outline_location(raw, first) + ": the loop starts and ends at " +
+                     format_point(raw.points[first]) +
+                     ", where the outline is round (its two ends leave in opposite directions), "
+                     "not at the trailing edge; start the loop at the trailing edge, or list the "
+                     "two surfaces separately from the leading edge");
+}
 
 std::string outline_location(const RawOutline& raw, std::size_t k) {
     if (k < raw.lines.size()) return raw.source + ":" + std::to_string(raw.lines[k]);

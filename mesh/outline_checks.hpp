@@ -34,6 +34,10 @@ std::string point_label(const RawOutline& raw, std::size_t k);
 /// "; neighbours: <label of point first - 1>, <label of point last + 1>" (those that exist).
 std::string neighbours_text(const RawOutline& raw, std::size_t first, std::size_t last);
 
+/// Throws the InputError for a loop that starts and ends at the round nose instead of the
+/// trailing edge; `first` is the source index of its first point.
+[[noreturn]] void refuse_loop_start(const RawOutline& raw, std::size_t first);
+
 /// Throws a one-line InputError naming the source (and file line) for the first failed check:
 /// too few points, repeated consecutive points (a duplicated station), an outline that does not
 /// close, a pair of points in reverse order or a sharp reversal away from the trailing edge, a

@@ -50,7 +50,6 @@ Section make_section(const RawOutline& raw, const std::string& name, ChordLineCh
     VEER_VERIFY(!hint || *hint < w.points.size(), "leading-edge index inside the outline");
     Section section;
     section.name = name;
-    section.layout = raw.layout;
     const bool upper_first = twice_signed_area(w.points) > 0.0;  // counter-clockwise
     if (!raw.layout.empty())
         section.layout =
@@ -66,12 +65,13 @@ Section make_section(const RawOutline& raw, const std::string& name, ChordLineCh
         section.frame.found_trailing_edge = 0.5 * (w.points.front() + w.points.back());
         section.frame.found_foremost = w.points[w.nose];
     } else {
-        const int set_aside = set_aside_base_points(w, outline_size(w.points));
+        section.closure.base_points_set_aside = set_aside_base_points(w, outline_size(w.points));
+        const int set_aside = section.closure.base_points_set_aside;
         if (set_aside > 0) check_gap(raw, w);
+        check_ends_at_trailing_edge(raw, w);
         check_smoothness(raw, w);
         section.frame = choose_frame(w, chord_line, raw.source);
         apply_frame(w, section.frame);
-        section.closure.base_points_set_aside = set_aside;
     }
     const int set_aside = section.closure.base_points_set_aside;
     section.closure = close_trailing_edge(w);

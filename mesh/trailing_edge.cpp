@@ -5,6 +5,7 @@
 #include <numbers>
 
 #include "mesh/errors.hpp"
+#include "mesh/outline_checks.hpp"
 
 namespace veer {
 namespace {
@@ -87,6 +88,13 @@ int set_aside_base_points(OutlineWork& w, double chord) {
         std::reverse(w.source.begin(), w.source.end());
     }
     return removed;
+}
+
+void check_ends_at_trailing_edge(const RawOutline& raw, const OutlineWork& w) {
+    const auto& p = w.points;
+    const std::size_t n = p.size();
+    if (n < 4 || dot(p[1] - p[0], p[n - 2] - p[n - 1]) >= 0.0) return;
+    refuse_loop_start(raw, w.source.front());
 }
 
 TrailingEdgeClosure close_trailing_edge(OutlineWork& w) {

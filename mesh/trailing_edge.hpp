@@ -4,6 +4,7 @@
 #include <cstddef>
 #include <vector>
 
+#include "mesh/raw_outline.hpp"
 #include "mesh/section.hpp"
 
 namespace veer {
@@ -39,6 +40,12 @@ struct TrailingEdgeLimits {
 /// point repeating its neighbour at either end, and returns how many there were. `chord` is the
 /// outline's size in its own units.
 int set_aside_base_points(OutlineWork& w, double chord);
+
+/// Throws InputError (naming `raw`'s lines) when the ends of `w` (base points set aside) do not
+/// look like a trailing edge: there both surfaces leave towards the nose, so their first
+/// segments point within 90 degrees of each other; a loop that starts at a round nose leaves it
+/// in nearly opposite directions.
+void check_ends_at_trailing_edge(const RawOutline& raw, const OutlineWork& w);
 
 /// Closes the trailing edge of `w` (in chord units): a gap of at most sharp_gap is made exact,
 /// a blunt one gets a wedge or a fairing ending at a tip added first and last. Returns

@@ -298,6 +298,24 @@ TEST(SectionBuilder, PairInReverseOrderIsNamed) {
     expect_contains(e, "line 35 (");
 }
 
+TEST(SectionBuilder, LoopStartingAtTheNoseIsRefused) {
+    // a loop listed from the nose over the upper surface to the trailing edge and back: with a
+    // sharp edge it turns back at the tip, with a blunt one it does not, and both are named
+    for (const double last : {-0.1036, -0.1015}) {
+        const test::Surfaces s =
+            test::naca_surfaces({0.04, 0.4, 0.12, last}, test::cosine_stations(35));
+        RawOutline raw;
+        raw.source = "nose_first.dat";
+        raw.points = s.upper;
+        raw.points.insert(raw.points.end(), s.lower.rbegin() + 1, s.lower.rend());
+        for (std::size_t k = 0; k < raw.points.size(); ++k)
+            raw.lines.push_back(static_cast<int>(k) + 2);
+        expect_contains(error_of(raw),
+                        "nose_first.dat:2: the loop starts and ends at (0, 0), "
+                        "where the outline is round");
+    }
+}
+
 TEST(SectionBuilder, ErrorsAreOneLine) {
     RawOutline raw = as_file(naca_outline("0012", TrailingEdge::open, 61));
     raw.points.resize(60);
