@@ -13,28 +13,30 @@ int run_check_command(const CaseOptions& options) {
     const CaseSpec c = read_case_file(options.case_file, options.overrides);
     const MeshBuild mesh = build_mesh(c);  // geometry and grid are checked by building them
     fmt::print("{}: valid case\n", c.path.string());
-    fmt::print("  section   {} ({} outline points)\n", mesh.section.name,
+    fmt::print("  section        {} ({} outline points)\n", mesh.section.name,
                mesh.section.points.size());
     if (c.geometry.circle)
         fmt::print(
-            "  grid      O-grid of {} x {} cells (around {}, normal {}), far field {} diameters, "
-            "first cell {:.3g} diameters; lengths, Re and coefficients on the diameter\n",
+            "  grid           O-grid of {} x {} cells (around {}, normal {}), far field {} "
+            "diameters, first cell {:.3g} diameters; lengths, Re and coefficients on the "
+            "diameter\n",
             mesh.grid.ni(), mesh.grid.nj(), mesh.spec.around, mesh.spec.normal, mesh.spec.far_field,
             mesh.spec.first_cell);
     else {
-        print_section_notes(mesh.section, 16);
+        print_section_notes(mesh.section, 15);
         fmt::print(
-            "  grid      {} x {} cells (around {}, wake {} each side, normal {}), far field {} "
+            "  grid           {} x {} cells (around {}, wake {} each side, normal {}), far field "
+            "{} "
             "chords, first cell {:.3g} chords\n",
             mesh.grid.ni(), mesh.grid.nj(), mesh.spec.around, mesh.spec.wake, mesh.spec.normal,
             mesh.spec.far_field, mesh.spec.first_cell);
     }
-    fmt::print("  flow      Re {:g}, alpha {:g} deg, {}\n", c.flow.reynolds, c.flow.alpha_deg,
+    fmt::print("  flow           Re {:g}, alpha {:g} deg, {}\n", c.flow.reynolds, c.flow.alpha_deg,
                c.model);
-    fmt::print("  run       {} (cap {} steps{}{})\n", c.run.mode, c.run.steps,
+    fmt::print("  run            {} (cap {} steps{}{})\n", c.run.mode, c.run.steps,
                c.run.mode == "unsteady" ? fmt::format(", end time {:g}", c.run.end_time) : "",
                c.run.start_spin > 0 ? fmt::format(", start spin {:g}", c.run.start_spin) : "");
-    for (const std::string& w : mesh.quality.warnings) fmt::print("  warning   {}\n", w);
+    for (const std::string& w : mesh.quality.warnings) fmt::print("  warning        {}\n", w);
     return 0;
 }
 

@@ -73,6 +73,31 @@ double fairing_length(double half_gap, double phi_lower, double phi_upper) {
     return 0.5 * (shortest + longest);
 }
 
+/// The fairing of a blunt edge between the corners `lower` and `upper`, leaving them along
+/// t_lower and t_upper: the tip, and each side's points between its corner and the tip.
+struct Fairing {
+    Vec2 tip;
+    std::vector<Vec2> lower_side, upper_side;
+};
+
+Fairing fair(Vec2 lower, Vec2 upper, Vec2 t_lower, Vec2 t_upper) {
+    const Vec2 sum = t_lower + t_upper;
+    const Vec2 axis = norm(sum) > 1e-6 ? unit(sum) : Vec2{1.0, 0.0};
+    const Vec2 across = rotate_ccw(axis);  // from the lower corner towards the upper
+    // angle of each side's direction towards the bisector (positive: converging)
+    const double phi_lower = std::asin(std::clamp(dot(t_lower, across), -1.0, 1.0));
+    const double phi_upper = std::asin(std::clamp(-dot(t_upper, across), -1.0, 1.0));
+    Fairing f;
+    const double half_gap = 0.5 * norm(upper - lower);
+    f.tip = 0.5 * (lower + upper) + fairing_length(half_gap, phi_lower, phi_upper) * axis;
+    const double theta = radians(Limits::fairing_half_angle_degrees);
+    f.lower_side =
+        fairing_side(lower, t_lower, f.tip, std::cos(theta) * axis + std::sin(theta) * across);
+    f.upper_side =
+        fairing_side(upper, t_upper, f.tip, std::cos(theta) * axis - std::sin(theta) * across);
+    return f;
+}
+
 }  // namespace
 
 int set_aside_base_points(OutlineWork& w, double chord) {
@@ -119,18 +144,10 @@ TrailingEdgeClosure close_trailing_edge(OutlineWork& w) {
         tip = 0.5 * ((lower + m.s * t_lower) + (upper + m.r * t_upper));
     } else {
         closure.form = TrailingEdgeClosure::Form::fairing;
-        const Vec2 sum = t_lower + t_upper;
-        const Vec2 axis = norm(sum) > 1e-6 ? unit(sum) : Vec2{1.0, 0.0};
-        const Vec2 across = rotate_ccw(axis);  // from the lower corner towards the upper
-        // angle of each side's direction towards the bisector (positive: converging)
-        const double phi_lower = std::asin(std::clamp(dot(t_lower, across), -1.0, 1.0));
-        const double phi_upper = std::asin(std::clamp(-dot(t_upper, across), -1.0, 1.0));
-        tip = centre + fairing_length(0.5 * closure.gap, phi_lower, phi_upper) * axis;
-        const double theta = radians(Limits::fairing_half_angle_degrees);
-        const Vec2 d_lower = std::cos(theta) * axis + std::sin(theta) * across;
-        const Vec2 d_upper = std::cos(theta) * axis - std::sin(theta) * across;
-        lower_side = fairing_side(lower, t_lower, tip, d_lower);
-        upper_side = fairing_side(upper, t_upper, tip, d_upper);
+        Fairing f = fair(lower, upper, t_lower, t_upper);
+        tip = f.tip;
+        lower_side = std::move(f.lower_side);
+        upper_side = std::move(f.upper_side);
     }
     closure.length = norm(tip - centre);
     // lower side: tip first, then the fairing towards the corner

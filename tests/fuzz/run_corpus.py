@@ -20,8 +20,10 @@ HERE = os.path.dirname(os.path.abspath(__file__))
 sys.path.insert(0, HERE)
 import make_mutants  # noqa: E402
 
-# Passive OpenMP waits set here spare veer its restart to set them (app/wait_policy.hpp).
-ENV = dict(os.environ, OMP_WAIT_POLICY=os.environ.get("OMP_WAIT_POLICY", "PASSIVE"))
+# Passive OpenMP waits set here spare veer its restart to set them (app/wait_policy.hpp); one
+# thread each, since the runner already runs two at a time.
+ENV = dict(os.environ, OMP_WAIT_POLICY=os.environ.get("OMP_WAIT_POLICY", "PASSIVE"),
+           OMP_NUM_THREADS=os.environ.get("OMP_NUM_THREADS", "1"))
 
 
 def check_one(veer, case, timeout):

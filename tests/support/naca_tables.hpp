@@ -72,6 +72,16 @@ inline Surfaces naca_surfaces(const NacaDigits& d, const std::vector<double>& st
     return s;
 }
 
+/// `s` with its trailing edge opened by `gap` (chords): gap / 2 * x added to each surface's
+/// distance from the camber line, as a section thickened for strength or manufacture would be.
+inline Surfaces opened_by(Surfaces s, double gap) {
+    for (std::size_t k = 0; k < s.upper.size(); ++k) {
+        s.upper[k].y += 0.5 * gap * s.upper[k].x;
+        s.lower[k].y -= 0.5 * gap * s.lower[k].x;
+    }
+    return s;
+}
+
 /// One closed loop: upper trailing edge -> leading edge (once) -> lower trailing edge.
 inline std::vector<Vec2> loop_of(const Surfaces& s) {
     std::vector<Vec2> loop(s.upper.rbegin(), s.upper.rend());

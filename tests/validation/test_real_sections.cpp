@@ -93,12 +93,8 @@ TEST(RealSections, Table4412GivesTheAnalyticForcesTurbulent) { compare_table_wit
 /// NACA 0012 (closed-edge formula, section 6.4 [T]) at 81 cosine stations with the trailing
 /// edge opened to `gap` by adding gap / 2 * x to the half-thickness.
 std::vector<Vec2> opened_0012(double gap) {
-    test::Surfaces s = test::naca_surfaces({0.0, 0.4, 0.12, -0.1036}, test::cosine_stations(81));
-    for (std::size_t k = 0; k < s.upper.size(); ++k) {
-        s.upper[k].y += 0.5 * gap * s.upper[k].x;
-        s.lower[k].y -= 0.5 * gap * s.lower[k].x;
-    }
-    return test::loop_of(s);
+    return test::loop_of(test::opened_by(
+        test::naca_surfaces({0.0, 0.4, 0.12, -0.1036}, test::cosine_stations(81)), gap));
 }
 
 TEST(RealSections, BluntTrailingEdgesMeshAndRunOnTheDemoGrid) {

@@ -6,6 +6,7 @@
 #include <string>
 #include <vector>
 
+#include "mesh/cgrid_spec.hpp"
 #include "mesh/naca.hpp"
 #include "mesh/raw_outline.hpp"
 #include "mesh/section_builder.hpp"
@@ -13,6 +14,18 @@
 #include "mesh/surface_sampling.hpp"
 
 namespace veer::test {
+
+/// The grid of the demo case, cases/indoor-flyer-laminar.toml: 256 x 64, wake 48, far field 30,
+/// first cell 2e-3.
+inline CGridSpec demo_cgrid_spec() {
+    CGridSpec spec;
+    spec.around = 256;
+    spec.normal = 64;
+    spec.wake = 48;
+    spec.far_field = 30.0;
+    spec.first_cell = 2e-3;
+    return spec;
+}
 
 /// A NACA section through the project's geometry chain, sampled with `around` cells.
 inline std::vector<Vec2> naca_surface(const std::string& digits, int around) {

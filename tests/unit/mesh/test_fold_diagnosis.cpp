@@ -4,6 +4,7 @@
 
 #include <cmath>
 
+#include "cgrid_test_support.hpp"
 #include "mesh/cgrid.hpp"
 #include "mesh/fold_diagnosis.hpp"
 #include "mesh/naca.hpp"
@@ -13,16 +14,6 @@
 
 namespace veer {
 namespace {
-
-CGridSpec demo_grid() {  // cases/indoor-flyer-laminar.toml
-    CGridSpec spec;
-    spec.around = 256;
-    spec.normal = 64;
-    spec.wake = 48;
-    spec.far_field = 30.0;
-    spec.first_cell = 2e-3;
-    return spec;
-}
 
 void expect_contains(const std::string& text, const std::string& part) {
     EXPECT_NE(text.find(part), std::string::npos) << "'" << part << "' not in: " << text;
@@ -41,7 +32,7 @@ TEST(FoldDiagnosis, ConcaveBendNamesItsPlaceRadiusAndLine) {
     for (std::size_t k = 0; k < raw.points.size(); ++k)
         raw.lines.push_back(static_cast<int>(k) + 2);
     const Section section = make_section(raw, "dented");
-    const CGridSpec spec = demo_grid();
+    const CGridSpec spec = test::demo_cgrid_spec();
     const std::vector<Vec2> surface = sample_surface(section, spec.around);
     try {
         generate_cgrid(surface, spec);
@@ -63,7 +54,7 @@ TEST(FoldDiagnosis, WakeFoldAtTheTipNamesTheTrailingEdge) {
     // a sharp 0012: the cause named is the tip, with its half-angle (atan 0.145 = 8.26 deg, the
     // closed-edge thickness slope at x = 1)
     const Section section = make_section(naca_outline("0012", TrailingEdge::closed), "0012");
-    const CGridSpec spec = demo_grid();
+    const CGridSpec spec = test::demo_cgrid_spec();
     const std::vector<Vec2> surface = sample_surface(section, spec.around);
     const GridFoldError fold("folded", MarchOutcome{true, spec.wake - 1, 12, {1.004, -0.05}}, 0.05);
     const std::string m = explain_fold(fold, section, surface, spec);
@@ -77,7 +68,7 @@ TEST(FoldDiagnosis, WakeFoldAtTheTipNamesTheTrailingEdge) {
 TEST(FoldDiagnosis, NoFeatureGivesTheGridRemedies) {
     // mid-chord of a smooth section, far from the wall: nothing in the outline explains it
     const Section section = make_section(naca_outline("0012", TrailingEdge::closed), "0012");
-    const CGridSpec spec = demo_grid();
+    const CGridSpec spec = test::demo_cgrid_spec();
     const std::vector<Vec2> surface = sample_surface(section, spec.around);
     const int i = spec.wake + spec.around / 4;
     const GridFoldError fold("folded", MarchOutcome{true, i, 40, {0.5, -1.0}}, 1.0);

@@ -5,6 +5,7 @@
 #include <cmath>
 #include <numbers>
 
+#include "cgrid_test_support.hpp"
 #include "mesh/cgrid.hpp"
 #include "mesh/section_builder.hpp"
 #include "mesh/surface_sampling.hpp"
@@ -21,12 +22,8 @@ constexpr double k_degrees = 180.0 / std::numbers::pi;
 /// gap / 2 * x to the half-thickness, as a section thickened for strength or manufacture would
 /// be; 6 decimals.
 std::vector<Vec2> opened_0012(double gap) {
-    test::Surfaces s = test::naca_surfaces({0.0, 0.4, 0.12, -0.1036}, test::cosine_stations(81));
-    for (std::size_t k = 0; k < s.upper.size(); ++k) {
-        s.upper[k].y += 0.5 * gap * s.upper[k].x;
-        s.lower[k].y -= 0.5 * gap * s.lower[k].x;
-    }
-    return test::loop_of(s);
+    return test::loop_of(test::opened_by(
+        test::naca_surfaces({0.0, 0.4, 0.12, -0.1036}, test::cosine_stations(81)), gap));
 }
 
 RawOutline as_raw(std::vector<Vec2> points, const std::string& source) {
@@ -64,12 +61,7 @@ TEST(TrailingEdgeClosure, EveryAcceptedGapClosesToASlenderTip) {
 TEST(TrailingEdgeClosure, EveryAcceptedGapMeshesOnTheDemoGrid) {
     // the demo grid of cases/indoor-flyer-laminar.toml: 256 x 64, wake 48, far field 30, first
     // cell 2e-3. Before the fairing, gaps of 1.25 % chord and more folded the grid here.
-    CGridSpec spec;
-    spec.around = 256;
-    spec.normal = 64;
-    spec.wake = 48;
-    spec.far_field = 30.0;
-    spec.first_cell = 2e-3;
+    const CGridSpec spec = test::demo_cgrid_spec();
     for (double gap : {0.005, 0.0125, 0.025, 0.049}) {
         const Section s = make_section(as_raw(opened_0012(gap), "gap.dat"), "g");
         EXPECT_NO_THROW(generate_cgrid(sample_surface(s, spec.around), spec)) << gap;
