@@ -87,9 +87,11 @@ int run_run_command(const RunOptions& o) {
     } else {
         MeshBuild mesh = build_mesh(spec);
         for (const std::string& w : mesh.quality.warnings) fmt::print("mesh warning: {}\n", w);
-        write_json_file(out / "section.json", section_placement_json(mesh.section));
         grid = std::move(mesh.grid);
-        header_section = std::move(mesh.section);
+        if (!spec.geometry.circle) {  // a circle has no chord line or trailing edge to place
+            write_json_file(out / "section.json", section_placement_json(mesh.section));
+            header_section = std::move(mesh.section);
+        }
     }
     fmt::print("{}: {} x {} cells, Re {:g}, alpha {:g} deg, {} {}\n", spec.geometry.name, grid.ni(),
                grid.nj(), spec.flow.reynolds, spec.flow.alpha_deg, spec.model, spec.run.mode);

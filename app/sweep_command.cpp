@@ -153,8 +153,10 @@ int run_sweep(const SweepOptions& o, const SweepRanks& ranks) {
         fmt::print("{}: {} x {} cells, Re {:g}, {} points on {} process{}\n", base.geometry.name,
                    mesh.grid.ni(), mesh.grid.nj(), base.flow.reynolds, angles.size(), ranks.size(),
                    ranks.size() > 1 ? "es" : "");
-        print_section_notes(mesh.section, 15);
-        write_json_file(o.out_dir / "section.json", section_placement_json(mesh.section));
+        if (!base.geometry.circle) {  // a circle has no chord line or trailing edge to place
+            print_section_notes(mesh.section, 15);
+            write_json_file(o.out_dir / "section.json", section_placement_json(mesh.section));
+        }
     }
     const BlockResult mine = run_block(o, sweep, angles, mine_points, mesh.grid);
     const bool interrupted = ranks.any(mine.interrupted);
