@@ -8,21 +8,27 @@
 
 namespace veer {
 namespace {
-/// First value of a record with the nu_tilde reference (the older record starts with the step
-/// count, which is never negative).
-constexpr double record_with_nu_tilde = -2.0;
-constexpr std::size_t legacy_head = 5;  // count, 3 references, relative
-constexpr std::size_t head = 7;         // marker, count, 4 references, relative
+// Records: [marker, count, references..., relative, (Cl, Cd) pairs]. The first value tells the
+// layout; the oldest record starts with the step count, which is never negative.
+constexpr double record_with_count = -3.0;    // marker, count, n, n references, relative
+constexpr double record_with_four = -2.0;     // marker, count, 4 references, relative
+constexpr std::size_t oldest_references = 3;  // count, 3 references, relative
 }  // namespace
 
+std::vector<double> step_residuals(const StepReport& step) {
+    std::vector<double> r = {step.residual_u, step.residual_v, step.residual_continuity};
+    r.insert(r.end(), step.model_residuals.begin(), step.model_residuals.end());
+    return r;
+}
+
 bool ConvergenceMonitor::add(const ConvergenceSample& s) {
-    const double r[residual_count] = {s.residual_u, s.residual_v, s.residual_continuity,
-                                      s.residual_nu_tilde};
+    const std::vector<double>& r = s.residuals;
+    if (m_reference.size() < r.size()) m_reference.resize(r.size(), 0.0);
     ++m_count;
     if (m_count <= m_criteria.reference_steps)
-        for (int k = 0; k < residual_count; ++k) m_reference[k] = std::max(m_reference[k], r[k]);
+        for (std::size_t k = 0; k < r.size(); ++k) m_reference[k] = std::max(m_reference[k], r[k]);
     m_relative = 0.0;
-    for (int k = 0; k < residual_count; ++k)
+    for (std::size_t k = 0; k < r.size(); ++k)
         if (m_reference[k] > 0.0) m_relative = std::max(m_relative, r[k] / m_reference[k]);
     m_cl.push_back(s.cl);
     m_cd.push_back(s.cd);
@@ -34,9 +40,10 @@ bool ConvergenceMonitor::add(const ConvergenceSample& s) {
     return m_relative <= m_criteria.residual_drop && force_change() <= m_criteria.force_tolerance;
 }
 
-void ConvergenceMonitor::raise_references(const std::array<double, residual_count>& floor) {
-    for (int k = 0; k < residual_count; ++k)
-        m_reference[k] = std::max(m_reference[k], floor[static_cast<std::size_t>(k)]);
+void ConvergenceMonitor::raise_references(const std::vector<double>& floor) {
+    if (m_reference.size() < floor.size()) m_reference.resize(floor.size(), 0.0);
+    for (std::size_t k = 0; k < floor.size(); ++k)
+        m_reference[k] = std::max(m_reference[k], floor[k]);
 }
 
 double ConvergenceMonitor::force_change() const {
@@ -50,13 +57,10 @@ double ConvergenceMonitor::force_change() const {
 }
 
 std::vector<double> ConvergenceMonitor::save() const {
-    std::vector<double> out = {record_with_nu_tilde,
-                               static_cast<double>(m_count),
-                               m_reference[0],
-                               m_reference[1],
-                               m_reference[2],
-                               m_reference[3],
-                               m_relative};
+    std::vector<double> out = {record_with_count, static_cast<double>(m_count),
+                               static_cast<double>(m_reference.size())};
+    out.insert(out.end(), m_reference.begin(), m_reference.end());
+    out.push_back(m_relative);
     for (std::size_t k = 0; k < m_cl.size(); ++k) {
         out.push_back(m_cl[k]);
         out.push_back(m_cd[k]);
@@ -65,14 +69,23 @@ std::vector<double> ConvergenceMonitor::save() const {
 }
 
 void ConvergenceMonitor::load(const std::vector<double>& saved) {
-    m_legacy = !saved.empty() && saved[0] != record_with_nu_tilde;
-    const std::size_t start = m_legacy ? legacy_head : head;
+    VEER_VERIFY(!saved.empty(), "empty convergence record");
+    std::size_t at = 0, references = oldest_references;  // where the count is; how many refs
+    if (saved[0] == record_with_count) {
+        VEER_VERIFY(saved.size() >= 3 && saved[2] >= 0.0, "bad convergence record");
+        at = 1;
+        references = static_cast<std::size_t>(saved[2]);
+    } else if (saved[0] == record_with_four) {
+        at = 1;
+        references = 4;
+    }
+    m_legacy = at == 0;
+    const std::size_t first_reference = at == 0 ? 1 : (saved[0] == record_with_count ? 3 : 2);
+    const std::size_t start = first_reference + references + 1;  // first (Cl, Cd) pair
     VEER_VERIFY(saved.size() >= start && (saved.size() - start) % 2 == 0, "bad convergence record");
-    const std::size_t at = m_legacy ? 0 : 1;  // where the count is
     m_count = static_cast<long>(saved[at]);
-    const int kept = m_legacy ? 3 : residual_count;
-    for (int k = 0; k < residual_count; ++k)
-        m_reference[k] = k < kept ? saved[at + 1 + static_cast<std::size_t>(k)] : 0.0;
+    m_reference.assign(saved.begin() + static_cast<std::ptrdiff_t>(first_reference),
+                       saved.begin() + static_cast<std::ptrdiff_t>(first_reference + references));
     m_relative = saved[start - 1];
     m_cl.clear();
     m_cd.clear();

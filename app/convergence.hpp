@@ -1,11 +1,12 @@
 #pragma once
 /// Decides when a steady run has converged: residuals fallen by the requested factor from their
 /// reference (the largest of the first steps) and Cl, Cd settled over a window of steps. The
-/// residuals are those of every equation solved: u, v, continuity and, with a turbulence model,
-/// nu_tilde (a residual that stays 0, as nu_tilde's does in laminar runs, is left out).
-#include <array>
+/// residuals are those of every equation solved: u, v, continuity, then each transported
+/// variable of the turbulence model (a residual that stays 0 is left out).
 #include <deque>
 #include <vector>
+
+#include "solver/flow_solver.hpp"
 
 namespace veer {
 
@@ -16,25 +17,24 @@ struct ConvergenceCriteria {
     int force_window = 100;         ///< steps over which the forces must have settled
 };
 
-/// One step's figures as the monitor sees them (nu_tilde last, so that older five-value
-/// initialisations keep their meaning).
+/// One step's figures as the monitor sees them.
 struct ConvergenceSample {
-    double residual_u = 0.0, residual_v = 0.0, residual_continuity = 0.0;
+    std::vector<double> residuals;  ///< u, v, continuity, then the model's (step_residuals())
     double cl = 0.0, cd = 0.0;
-    double residual_nu_tilde = 0.0;  ///< 0 when laminar
 };
+
+/// A step's residuals in the monitor's order: u, v, continuity, then the model's variables.
+std::vector<double> step_residuals(const StepReport& step);
 
 class ConvergenceMonitor {
 public:
     explicit ConvergenceMonitor(ConvergenceCriteria criteria) : m_criteria(criteria) {}
 
-    static constexpr int residual_count = 4;  ///< u, v, continuity, nu_tilde
-
-    /// Raises the references to at least `floor` (u, v, continuity, nu_tilde). A run started
+    /// Raises the references to at least `floor` (step_residuals() order). A run started
     /// from another solution (a sweep's previous point) has small residuals of its own at the
     /// start; held to a fraction of those, it would chase round-off. Raised to the residuals of
     /// a start from the free stream, it meets the criterion of a single run.
-    void raise_references(const std::array<double, residual_count>& floor);
+    void raise_references(const std::vector<double>& floor);
 
     /// Records a step; returns true once both criteria hold.
     bool add(const ConvergenceSample& s);
@@ -48,10 +48,11 @@ public:
 
     /// The monitor's memory, for checkpoints (restarts continue bit for bit).
     std::vector<double> save() const;
-    /// Reads save()'s record, or the older one without nu_tilde (its nu_tilde reference is then
-    /// unknown: see legacy_record()).
+    /// Reads save()'s record, or an older one: that of four references (u, v, continuity and
+    /// the model's one variable) or the oldest, of three (no model reference: see
+    /// legacy_record()).
     void load(const std::vector<double>& saved);
-    /// True after load() of a record written before nu_tilde was monitored.
+    /// True after load() of a record written before the model's residual was monitored.
     bool legacy_record() const { return m_legacy; }
     /// Steps recorded so far (restarts included).
     long count() const { return m_count; }
@@ -59,7 +60,7 @@ public:
 private:
     ConvergenceCriteria m_criteria;
     long m_count = 0;
-    double m_reference[residual_count] = {0.0, 0.0, 0.0, 0.0};
+    std::vector<double> m_reference;  ///< one per residual (step_residuals() order)
     bool m_legacy = false;
     double m_relative = 1.0;
     std::deque<double> m_cl, m_cd;

@@ -15,9 +15,8 @@ namespace veer {
 Section build_section(const CaseSpec& c) {
     if (c.geometry.circle) return circle_section(c.mesh.around, c.geometry.name);
     if (!c.geometry.naca.empty()) {
-        const TrailingEdge te =
-            c.geometry.closed_trailing_edge ? TrailingEdge::closed : TrailingEdge::open;
-        return make_section(naca_outline(c.geometry.naca, te), c.geometry.name);
+        return make_section(naca_outline(c.geometry.naca, c.geometry.trailing_edge),
+                            c.geometry.name);
     }
     return make_section(read_coordinate_file(c.geometry.coordinates), c.geometry.name,
                         c.geometry.chord_line);

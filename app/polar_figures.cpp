@@ -8,7 +8,6 @@ namespace veer {
 namespace {
 
 constexpr double linear_tolerance = 0.02;  // fit residual / largest |cl| of the range
-constexpr double trailing_edge_zone = 0.95;
 
 struct Fit {
     double slope = 0.0, intercept = 0.0;
@@ -72,11 +71,6 @@ std::optional<LinearRange> linear_lift_range(std::vector<double> alpha, std::vec
     return LinearRange{f.slope, f.intercept, a[lo], a[hi], static_cast<int>(hi - lo + 1)};
 }
 
-bool shows_upper_separation(const PointRecord& r) {
-    return r.upper_bubble || (r.trailing_edge_separation_upper &&
-                              *r.trailing_edge_separation_upper < trailing_edge_zone);
-}
-
 PolarFigures polar_figures(const std::vector<PointRecord>& points) {
     std::vector<PointRecord> p;
     for (const PointRecord& r : points)
@@ -93,7 +87,7 @@ PolarFigures polar_figures(const std::vector<PointRecord>& points) {
         if (!f.cl_max || p[k].cl > *f.cl_max) f.cl_max = p[k].cl, f.alpha_cl_max = p[k].alpha;
         if (std::isfinite(p[k].cd) && (!f.cd_min || p[k].cd < *f.cd_min))
             f.cd_min = p[k].cd, f.alpha_cd_min = p[k].alpha;
-        if (!f.alpha_separation_onset && shows_upper_separation(p[k]))
+        if (!f.alpha_separation_onset && upper_surface_separated(p[k]))
             f.alpha_separation_onset = p[k].alpha;
         if (p[k].cl_momentum) {
             const double d = std::abs(p[k].cl - *p[k].cl_momentum);

@@ -34,11 +34,12 @@ void ProgressLine::update(const ProgressFigures& f, bool force) {
         f.fraction_done > 0.02 ? elapsed * (1 - f.fraction_done) / f.fraction_done : std::nan("");
     const std::string when = f.steady ? fmt::format("iter {:6}", f.step)
                                       : fmt::format("step {:6} t {:8.4f}", f.step, f.time);
-    const std::string nu_tilde =
-        f.turbulent ? fmt::format(" nu~ {:8.2e}", f.residual_nu_tilde) : std::string();
+    std::string model;
+    for (const auto& [label, residual] : f.model_residuals)
+        model += fmt::format(" {} {:8.2e}", label, residual);
     const std::string line = fmt::format(
         "{}{}  res u {:8.2e} v {:8.2e} div {:8.2e}{}  Cl {:8.5f}  Cd {:8.5f}  {:3.0f}%  left {}",
-        m_label, when, f.residual_u, f.residual_v, f.residual_continuity, nu_tilde, f.cl, f.cd,
+        m_label, when, f.residual_u, f.residual_v, f.residual_continuity, model, f.cl, f.cd,
         100 * f.fraction_done, format_duration(left));
     if (m_terminal)
         std::fprintf(stderr, "\r%s\033[K", line.c_str());
@@ -48,7 +49,7 @@ void ProgressLine::update(const ProgressFigures& f, bool force) {
     m_drawn = true;
 }
 
-void ProgressLine::finish() {
+void ProgressLine::finish() const {
     if (m_enabled && m_terminal && m_drawn) std::fprintf(stderr, "\n");
 }
 

@@ -3,6 +3,8 @@
 /// in place on a terminal and printed as plain lines (at most every few seconds) otherwise.
 #include <chrono>
 #include <string>
+#include <utility>
+#include <vector>
 
 namespace veer {
 
@@ -13,8 +15,8 @@ struct ProgressFigures {
     double cl = 0.0, cd = 0.0;
     double fraction_done = 0.0;  ///< 0..1 estimate of the way to the end
     bool steady = true;
-    bool turbulent = false;          ///< show the nu_tilde residual too
-    double residual_nu_tilde = 0.0;  ///< turbulence model's working variable
+    /// The model's residuals with their labels (ModelVariable::label), shown after continuity.
+    std::vector<std::pair<std::string, double>> model_residuals;
 };
 
 class ProgressLine {
@@ -22,7 +24,7 @@ public:
     explicit ProgressLine(bool enabled, std::string label = "");
     void update(const ProgressFigures& f, bool force = false);
     /// Ends the line (a newline on a terminal).
-    void finish();
+    void finish() const;
 
 private:
     bool m_enabled;

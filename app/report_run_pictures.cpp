@@ -1,6 +1,7 @@
 // The pictures of one run: convergence history, Cp and Cf along the section, the flow near it.
 #include <fmt/format.h>
 
+#include <algorithm>
 #include <cmath>
 
 #include "app/report_csv.hpp"
@@ -52,6 +53,13 @@ void draw_convergence(const fs::path& history, const fs::path& file, const std::
     c.series = {{"u momentum", x, t.numbers("residual_u"), true, false, false, 0},
                 {"v momentum", x, t.numbers("residual_v"), true, false, false, 1},
                 {"continuity", x, t.numbers("residual_continuity"), true, false, false, 2}};
+    // Then the model's variables, one column each after Cm (io/history_file.hpp).
+    const std::vector<std::string>& names = t.names();
+    const auto cm = std::find(names.begin(), names.end(), "cm");
+    int colour = 3;
+    for (auto n = cm == names.end() ? cm : cm + 1; n != names.end(); ++n)
+        if (n->starts_with("residual_"))
+            c.series.push_back({n->substr(9), x, t.numbers(*n), true, false, false, colour++});
     write_chart(c, file);
 }
 

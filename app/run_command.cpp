@@ -10,6 +10,7 @@
 #include "app/run_report.hpp"
 #include "app/section_notes.hpp"
 #include "app/simulation.hpp"
+#include "io/case_choices.hpp"
 #include "io/case_file.hpp"
 #include "io/checkpoint.hpp"
 #include "io/json_writer.hpp"
@@ -94,7 +95,8 @@ int run_run_command(const RunOptions& o) {
         }
     }
     fmt::print("{}: {} x {} cells, Re {:g}, alpha {:g} deg, {} {}\n", spec.geometry.name, grid.ni(),
-               grid.nj(), spec.flow.reynolds, spec.flow.alpha_deg, spec.model, spec.run.mode);
+               grid.nj(), spec.flow.reynolds, spec.flow.alpha_deg, spec.model.name,
+               mode_word(spec.run.mode));
     if (header_section) print_section_notes(*header_section, 15);
     SimulationOptions options;
     options.progress = !o.quiet;
@@ -102,7 +104,7 @@ int run_run_command(const RunOptions& o) {
     // means over whole cycles (the route is quadratic in the velocity: run_report.hpp).
     std::optional<ControlVolumeHistory> routes;
     const Simulation* running = nullptr;
-    if (spec.run.mode == "unsteady" && grid.c_layout()) {
+    if (spec.run.mode == TimeMode::time_accurate && grid.c_layout()) {
         routes.emplace(grid, spec.post.contours);
         options.stop_early = [&routes, &running](const StepReport& step, double,
                                                  const SurfaceForces&) {

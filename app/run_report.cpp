@@ -4,36 +4,16 @@
 
 #include <algorithm>
 #include <cmath>
-#include <fstream>
 #include <nlohmann/json.hpp>
-#include <sstream>
 
-#include "app/report_csv.hpp"
-#include "app/run_tables.hpp"
+#include "app/closing_table.hpp"
+#include "io/case_choices.hpp"
 #include "io/json_writer.hpp"
-#include "io/vtk_grid_writer.hpp"
-#include "mesh/circle.hpp"
-#include "postprocess/recirculation.hpp"
+#include "io/run_tables.hpp"
 #include "postprocess/time_average.hpp"
 
 namespace veer {
 namespace {
-
-const char* status_word(RunStatus s) {
-    switch (s) {
-        case RunStatus::converged:
-            return "converged";
-        case RunStatus::step_cap:
-            return "step cap reached";
-        case RunStatus::end_time:
-            return "end time reached";
-        case RunStatus::interrupted:
-            return "interrupted";
-        case RunStatus::diverged:
-            return "diverged";
-    }
-    return "?";
-}
 
 nlohmann::json location_or_null(const std::optional<SurfaceLocation>& l) {
     return l ? nlohmann::json(l->x) : nlohmann::json(nullptr);
@@ -96,21 +76,6 @@ nlohmann::json time_average_json(const UnsteadyFigures& u, const CaseSpec& spec)
     return t;
 }
 
-/// Separation angles, recirculation length and base pressure of the circle.
-CircleFigures circle_figures(const Simulation& sim, const FlowFields& f, const RunAnalysis& a) {
-    CircleFigures c;
-    auto angle = [](const std::vector<SurfaceLocation>& v) {
-        return v.empty() ? std::nullopt
-                         : std::optional<double>(angle_from_rear_deg({v.front().x, v.front().y}));
-    };
-    c.separation_angle_upper = angle(a.separation.upper.separations);
-    c.separation_angle_lower = angle(a.separation.lower.separations);
-    if (sim.spec().run.mode == "steady")
-        c.recirculation_length = recirculation_length(sim.grid(), sim.metrics(), f);
-    c.base_cp = 0.5 * (a.kutta.cp_upper + a.kutta.cp_lower);
-    return c;
-}
-
 nlohmann::json optional_json(const std::optional<double>& v) {
     return v ? nlohmann::json(*v) : nlohmann::json(nullptr);
 }
@@ -118,29 +83,15 @@ nlohmann::json optional_json(const std::optional<double>& v) {
 }  // namespace
 
 RunAnalysis analyse_run(const Simulation& sim) {
-    RunAnalysis a;
     const CaseSpec& spec = sim.spec();
-    const FlowFields f = sim.solver().fields();
-    a.forces = integrate_surface_forces(sim.grid(), sim.metrics(), f, spec.flow,
-                                        surface_force_options(spec));
-    a.surface = surface_distribution(sim.grid(), sim.metrics(), f, spec.flow);
-    a.separation = find_separation(a.surface);
-    a.kutta = kutta_check(a.surface);
-    const auto contours = contours_at_distances(sim.grid(), spec.post.contours);
-    a.momentum = contour_forces(sim.grid(), sim.metrics(), f, spec.flow, contours);
-    a.circulation = contour_circulation(sim.grid(), sim.metrics(), f, contours);
-    WakeProfileOptions wake;
-    wake.stations = spec.post.wake_stations;
-    a.wake = wake_profiles(sim.grid(), sim.metrics(), f, spec.flow, wake);
-    if (spec.geometry.circle) a.circle = circle_figures(sim, f, a);
-    return a;
+    return analyse_flow(sim.grid(), sim.metrics(), sim.solver().fields(), spec.flow,
+                        analysis_places(spec));
 }
 
 UnsteadyFigures unsteady_figures(const Simulation& sim, const ControlVolumeHistory* routes) {
     UnsteadyFigures u;
-    const CsvTable h = CsvTable::read(sim.checkpoint_path().parent_path() / "history.csv");
-    u.shedding = shedding_statistics(h.numbers("time"), h.numbers("cl"), h.numbers("cd"),
-                                     h.numbers("cm"), summary_cycles);
+    const ForceRecord& h = sim.force_history();
+    u.shedding = shedding_statistics(h.time, h.cl, h.cd, h.cm, summary_cycles);
     if (u.shedding && routes)
         u.routes = routes->means(u.shedding->window, sim.spec().flow.alpha_deg);
     return u;
@@ -152,21 +103,19 @@ nlohmann::json summary_json(const Simulation& sim, const RunResult& r, const Run
     const SurfaceForces& f = a.forces;
     nlohmann::json cl_momentum = nlohmann::json::object(), cd_momentum = nlohmann::json::object(),
                    cl_circulation = nlohmann::json::object();
-    double worst = 0.0;
-    for (std::size_t k = 0; k < a.momentum.size(); ++k) {
+    for (std::size_t k = 0; k < a.routes.size(); ++k) {
         const std::string key = fmt::format("{:g}", spec.post.contours[k]);
-        cl_momentum[key] = a.momentum[k].cl.total;
-        cd_momentum[key] = a.momentum[k].cd.total;
-        cl_circulation[key] = a.circulation[k].cl;
-        worst = std::max(worst, std::abs(a.momentum[k].cl.total - f.cl.total));
+        cl_momentum[key] = a.routes[k].cl_momentum;
+        cd_momentum[key] = a.routes[k].cd_momentum;
+        cl_circulation[key] = a.routes[k].cl_circulation;
     }
     const bool settled = r.status == RunStatus::converged || r.status == RunStatus::end_time;
     nlohmann::json s = {
         {"section", spec.geometry.name},
         {"reynolds", spec.flow.reynolds},
         {"alpha", spec.flow.alpha_deg},
-        {"model", spec.model},
-        {"mode", spec.run.mode},
+        {"model", spec.model.name},
+        {"mode", mode_word(spec.run.mode)},
         {"cl", f.cl.total},
         {"cd", f.cd.total},
         {"cm", f.cm.total},
@@ -179,7 +128,7 @@ nlohmann::json summary_json(const Simulation& sim, const RunResult& r, const Run
         {"cl_momentum", cl_momentum},
         {"cd_momentum", cd_momentum},
         {"cl_circulation", cl_circulation},
-        {"max_lift_disagreement", worst},
+        {"max_lift_disagreement", a.max_lift_disagreement},
         {"stagnation_x", a.separation.stagnation.x},
         {"separation_upper", location_or_null(first(a.separation.upper.separations))},
         {"reattachment_upper",
@@ -206,6 +155,9 @@ nlohmann::json summary_json(const Simulation& sim, const RunResult& r, const Run
                         {"mean_flow_angle_deg", w.mean_flow_angle_deg},
                         {"downwash_deg", w.downwash_deg}});
     s["wake"] = wake;
+    const std::vector<ModelVariable>& variables = sim.solver().model_variables();
+    for (std::size_t k = 0; k < variables.size() && k < r.last.model_residuals.size(); ++k)
+        s["residual_" + variables[k].name] = r.last.model_residuals[k];
     s["reference_length"] = a.circle ? "diameter" : "chord";
     if (a.circle) {
         s["separation_angle_upper_deg"] = optional_json(a.circle->separation_angle_upper);
@@ -217,29 +169,31 @@ nlohmann::json summary_json(const Simulation& sim, const RunResult& r, const Run
         s["trailing_edge_cp_lower"] = a.kutta.cp_lower;
         s["trailing_edge_cp_difference"] = a.kutta.difference;
     }
-    if (spec.run.mode == "unsteady")
+    if (spec.run.mode == TimeMode::time_accurate)
         s["time_average"] = unsteady ? time_average_json(*unsteady, spec)
                                      : time_average_json(unsteady_figures(sim, nullptr), spec);
     return s;
 }
 
-void write_run_report(const Simulation& sim, const RunResult& r, ClosingTable table,
-                      const ControlVolumeHistory* routes) {
+std::optional<RunAnalysis> write_run_report(const Simulation& sim, const RunResult& r,
+                                            ClosingTable table,
+                                            const ControlVolumeHistory* routes) {
     const std::filesystem::path dir = sim.checkpoint_path().parent_path();
     if (!sim.grid().c_layout()) {  // verification blocks: no section, no forces
         write_json_file(dir / "summary.json", {{"converged", r.status == RunStatus::converged},
                                                {"iterations", r.steps},
                                                {"wall_seconds", r.wall_seconds}});
-        return;
+        return std::nullopt;
     }
     const RunAnalysis a = analyse_run(sim);
     write_surface_csv(dir / "surface.csv", a.surface);
     write_wake_csv(dir / "wake.csv", a.wake);
     write_surface_vtp_file(dir / "surface.vtp", a.surface);
-    const bool unsteady = sim.spec().run.mode == "unsteady";
+    const bool unsteady = sim.spec().run.mode == TimeMode::time_accurate;
     const UnsteadyFigures u = unsteady ? unsteady_figures(sim, routes) : UnsteadyFigures{};
     write_json_file(dir / "summary.json", summary_json(sim, r, a, unsteady ? &u : nullptr));
     if (table == ClosingTable::print) print_closing_table(sim.spec(), a, unsteady ? &u : nullptr);
+    return a;
 }
 
 }  // namespace veer

@@ -8,26 +8,18 @@
 #include <numbers>
 
 #include "app/free_stream_reference.hpp"
-#include "app/history_log.hpp"
 #include "app/interrupt.hpp"
 #include "app/progress_line.hpp"
 #include "io/field_series.hpp"
+#include "io/history_file.hpp"
 #include "mesh/circle.hpp"
 #include "mesh/errors.hpp"
+#include "postprocess/run_analysis.hpp"
 
 namespace veer {
 namespace {
 
 constexpr const char* convergence_record = "simulation_convergence";
-/// Default CFL number of time-accurate runs. Convection is implicit (first-order upwind) with a
-/// lagged second-order correction, so the step is set by accuracy, not stability. Laminar: 4.
-/// Measured on NACA 0012, Re 1000, alpha 12, 256 x 64, shedding from the free stream to t = 24,
-/// the last 8 cycles: Strouhal 0.7603 / 0.7604 / 0.7617, mean Cl 0.4679 / 0.4683 / 0.4709, Cl
-/// amplitude 0.0579 / 0.0577 / 0.0587 at CFL 0.8 / 4 / 8 (12987 / 2607 / 1313 steps): 4 is within
-/// 0.1 % of 0.8 on the means and 0.3 % on the amplitude. With the Spalart-Allmaras model 0.8
-/// (common practice for BDF2 with lagged convection terms; larger steps not yet measured on y+ 1
-/// grids).
-double default_unsteady_cfl(const CaseSpec& spec) { return spec.model == "laminar" ? 4.0 : 0.8; }
 
 ConvergenceCriteria criteria_for(const RunSpec& run) {
     ConvergenceCriteria c;
@@ -36,7 +28,7 @@ ConvergenceCriteria criteria_for(const RunSpec& run) {
     return c;
 }
 
-bool is_steady(const CaseSpec& spec) { return spec.run.mode == "steady"; }
+bool is_steady(const CaseSpec& spec) { return spec.run.mode == TimeMode::steady; }
 
 /// How long the start spin of a circle lasts (free-stream time units, diameters / U_inf): about
 /// a third of a shedding period at Re 100, enough to tip the wake to one side.
@@ -44,13 +36,28 @@ constexpr double start_spin_time = 2.0;
 
 }  // namespace
 
+const char* status_word(RunStatus s) {
+    switch (s) {
+        case RunStatus::converged:
+            return "converged";
+        case RunStatus::step_cap:
+            return "step cap";
+        case RunStatus::end_time:
+            return "end time";
+        case RunStatus::interrupted:
+            return "interrupted";
+        case RunStatus::diverged:
+            return "diverged";
+    }
+    return "?";
+}
+
 SolverSettings solver_settings_for(const CaseSpec& spec) {
     SolverSettings s;
     s.mode = is_steady(spec) ? TimeMode::steady : TimeMode::time_accurate;
-    s.pressure_solver = parse_pressure_solver_kind(spec.run.pressure_solver,
-                                                   spec.path.string() + ": [run] pressure_solver");
+    s.pressure_solver = spec.run.pressure_solver;
     if (is_steady(spec) && spec.run.cfl > 0) s.pseudo_cfl = spec.run.cfl;
-    s.turbulence = turbulence_model_kind(spec.model);
+    s.model = spec.model;
     if (spec.geometry.circle) {
         // The point vortex stands for a steady lift; a shedding circle's lift has zero mean and
         // its shed vortices carry the opposite circulation, so the far field stays the free
@@ -73,6 +80,16 @@ SurfaceForceOptions surface_force_options(const CaseSpec& spec) {
     return o;
 }
 
+AnalysisPlaces analysis_places(const CaseSpec& spec) {
+    AnalysisPlaces p;
+    p.contours = spec.post.contours;
+    p.wake_stations = spec.post.wake_stations;
+    p.forces = surface_force_options(spec);
+    p.circle = spec.geometry.circle;
+    p.steady = is_steady(spec);
+    return p;
+}
+
 Simulation::Simulation(const CaseSpec& spec, StructuredGrid grid, std::filesystem::path out_dir,
                        SimulationOptions options)
     : m_spec(spec),
@@ -81,7 +98,15 @@ Simulation::Simulation(const CaseSpec& spec, StructuredGrid grid, std::filesyste
       m_out(std::move(out_dir)),
       m_options(std::move(options)),
       m_solver(std::make_unique<FlowSolver>(m_grid, spec.flow, solver_settings_for(spec))),
-      m_monitor(criteria_for(spec.run)) {}
+      m_monitor(criteria_for(spec.run)) {
+    if (!m_grid.c_layout()) return;  // verification blocks: no section to analyse
+    // A contour or wake station the grid cannot hold is refused now, not after the run.
+    try {
+        check_analysis_places(m_grid, m_metrics, analysis_places(spec));
+    } catch (const InputError& e) {
+        throw InputError(spec.path.string() + ": [post] " + e.what());
+    }
+}
 
 Simulation::~Simulation() = default;
 
@@ -93,14 +118,19 @@ void Simulation::resume(const CheckpointData& checkpoint) {
         else
             solver_state.push_back(a);
     }
-    // A record from before nu_tilde was monitored has no nu_tilde reference; past the reference
-    // steps it cannot be rebuilt, and guessing one would change what "converged" means.
-    if (m_monitor.legacy_record() && m_spec.model != "laminar" &&
-        m_monitor.count() > criteria_for(m_spec.run).reference_steps)
-        throw InputError(
-            "this checkpoint of a " + m_spec.model +
-            " run was written by an older veer that did not monitor the nu_tilde residual; "
-            "start the run afresh (veer run CASE) to get a convergence check of every equation");
+    // A record from before the model's residual was monitored has no reference for it; past the
+    // reference steps it cannot be rebuilt, and guessing one would change what "converged" means.
+    if (m_monitor.legacy_record() && !m_solver->model_variables().empty() &&
+        m_monitor.count() > criteria_for(m_spec.run).reference_steps) {
+        std::string names;
+        for (const ModelVariable& v : m_solver->model_variables())
+            names += (names.empty() ? "" : ", ") + v.name;
+        throw InputError("this checkpoint of a " + m_spec.model.name +
+                         " run was written by an older veer that did not monitor the residual of " +
+                         names +
+                         "; start the run afresh (veer run CASE) to get a convergence check of "
+                         "every equation");
+    }
     m_solver->restore(solver_state);
     m_resumed = true;
     m_last_checkpoint_step = m_solver->step_count();
@@ -115,7 +145,7 @@ void Simulation::start_from(const FlowFields& initial) {
 }
 
 double Simulation::nominal_time_step() const {
-    const double cfl = m_spec.run.cfl > 0 ? m_spec.run.cfl : default_unsteady_cfl(m_spec);
+    const double cfl = m_spec.run.cfl > 0 ? m_spec.run.cfl : m_spec.model.time_accurate_cfl;
     return m_solver->time_step_for_cfl(cfl);
 }
 
@@ -138,6 +168,22 @@ void Simulation::write_checkpoint_now() {
     m_last_checkpoint_step = m_solver->step_count();
 }
 
+std::vector<std::pair<std::string, double>> Simulation::labelled_model_residuals(
+    const StepReport& r) const {
+    std::vector<std::pair<std::string, double>> out;
+    const std::vector<ModelVariable>& v = m_solver->model_variables();
+    for (std::size_t k = 0; k < v.size() && k < r.model_residuals.size(); ++k)
+        out.emplace_back(v[k].label, r.model_residuals[k]);
+    return out;
+}
+
+void Simulation::record_forces(double time, const SurfaceForces& f) {
+    m_forces.time.push_back(time);
+    m_forces.cl.push_back(f.cl.total);
+    m_forces.cd.push_back(f.cd.total);
+    m_forces.cm.push_back(f.cm.total);
+}
+
 std::string Simulation::divergence_diagnosis(const StepReport& r) const {
     const Vec2 where = m_metrics.centroid[m_metrics.cell(r.worst_i, r.worst_j)];
     const std::string kept = m_last_checkpoint_step >= 0
@@ -156,8 +202,10 @@ RunResult Simulation::run() {
     const auto start = std::chrono::steady_clock::now();
     const bool steady = is_steady(m_spec);
     const bool has_wall = m_grid.c_layout().has_value();
-    const bool turbulent = m_spec.model != "laminar";
-    HistoryLog history(m_out / "history.csv", m_resumed, m_solver->step_count());
+    std::vector<std::string> variables;
+    for (const ModelVariable& v : m_solver->model_variables()) variables.push_back(v.name);
+    HistoryFile history(m_out / "history.csv", variables, m_resumed, m_solver->step_count());
+    m_forces = history.kept_forces();
     FieldSeries series(m_out, m_resumed ? SeriesStart::resume : SeriesStart::fresh);
     auto frame_time = [&] {
         return steady ? static_cast<double>(m_solver->step_count()) : m_solver->time();
@@ -195,10 +243,10 @@ RunResult Simulation::run() {
                                                   m_spec.flow, surface_force_options(m_spec));
         history.append({r.step, r.time, r.residual_u, r.residual_v, r.residual_continuity,
                         res.forces.cl.total, res.forces.cd.total, res.forces.cm.total,
-                        r.residual_nu_tilde});
+                        r.model_residuals});
+        record_forces(r.time, res.forces);
         const bool converged =
-            m_monitor.add({r.residual_u, r.residual_v, r.residual_continuity, res.forces.cl.total,
-                           res.forces.cd.total, r.residual_nu_tilde});
+            m_monitor.add({step_residuals(r), res.forces.cl.total, res.forces.cd.total});
         if (m_monitor.blowing_up()) {
             res.status = RunStatus::diverged;
             res.diagnosis = divergence_diagnosis(r);
@@ -210,8 +258,8 @@ RunResult Simulation::run() {
                                       : r.time / m_spec.run.end_time;
         progress.update({r.step, r.time, r.residual_u, r.residual_v, r.residual_continuity,
                          res.forces.cl.total, res.forces.cd.total,
-                         std::clamp(std::max(by_steps, by_goal), 0.0, 1.0), steady, turbulent,
-                         r.residual_nu_tilde});
+                         std::clamp(std::max(by_steps, by_goal), 0.0, 1.0), steady,
+                         labelled_model_residuals(r)});
         if (m_spec.run.output_every > 0 && r.step % m_spec.run.output_every == 0)
             series.write_frame(frame_time(), m_grid, m_metrics, m_solver->fields());
         if (r.step % m_spec.run.checkpoint_every == 0) write_checkpoint_now();

@@ -6,18 +6,26 @@
 #include <functional>
 #include <memory>
 #include <string>
+#include <utility>
+#include <vector>
 
 #include "app/convergence.hpp"
 #include "io/case_spec.hpp"
 #include "io/checkpoint.hpp"
 #include "mesh/grid_metrics.hpp"
 #include "mesh/structured_grid.hpp"
+#include "postprocess/run_analysis.hpp"
 #include "postprocess/surface_forces.hpp"
+#include "postprocess/time_average.hpp"
 #include "solver/flow_solver.hpp"
 
 namespace veer {
 
 enum class RunStatus { converged, step_cap, end_time, interrupted, diverged };
+
+/// The word for a status in summary.json and the sweep records: "converged", "step cap",
+/// "end time", "interrupted", "diverged".
+const char* status_word(RunStatus status);
 
 /// How a run ended.
 struct RunResult {
@@ -65,9 +73,13 @@ public:
     const FlowSolver& solver() const { return *m_solver; }
     const CaseSpec& spec() const { return m_spec; }
     std::filesystem::path checkpoint_path() const { return m_out / "checkpoint.h5"; }
+    /// Time and surface forces of every step so far (a restart's earlier steps from its history).
+    const ForceRecord& force_history() const { return m_forces; }
 
 private:
     void write_checkpoint_now();
+    void record_forces(double time, const SurfaceForces& forces);
+    std::vector<std::pair<std::string, double>> labelled_model_residuals(const StepReport& r) const;
     std::string divergence_diagnosis(const StepReport& r) const;
     double next_time_step() const;
     double nominal_time_step() const;
@@ -81,6 +93,7 @@ private:
     ConvergenceMonitor m_monitor;
     bool m_resumed = false;
     long m_last_checkpoint_step = -1;
+    ForceRecord m_forces;
 };
 
 /// Solver settings for a case (mode, pressure solver, CFL; for the circle: no far-field vortex,
@@ -90,5 +103,9 @@ SolverSettings solver_settings_for(const CaseSpec& spec);
 /// How the surface forces of a case are integrated: moments about the quarter chord of a
 /// section, about the centre of the circle.
 SurfaceForceOptions surface_force_options(const CaseSpec& spec);
+
+/// What the post-processing of the case's fields looks at ([post] places, moment reference,
+/// circle or section, steady or not).
+AnalysisPlaces analysis_places(const CaseSpec& spec);
 
 }  // namespace veer

@@ -62,20 +62,22 @@ BlockResult run_block(const SweepOptions& o, const SweepCase& sweep,
                       const std::vector<double>& angles, const std::vector<std::size_t>& mine,
                       const StructuredGrid& grid) {
     BlockResult b;
+    std::vector<CaseSpec> specs;  // each point's case, derived once from the text read once
+    specs.reserve(mine.size());
+    for (std::size_t k : mine) specs.push_back(point_case(sweep, angles[k]));
     std::optional<FlowFields> previous;  // the fields the next point starts from
     const auto start = std::chrono::steady_clock::now();
     int ran = 0;
     for (std::size_t n = 0; n < mine.size(); ++n) {
         const std::size_t k = mine[n];
         const fs::path dir = o.out_dir / point_folder_name(angles[k]);
-        const std::string text = point_case_text(sweep, angles[k]);
-        if (std::optional<PointRecord> done = finished_point(dir, text)) {
+        if (std::optional<PointRecord> done = finished_point(dir, specs[n].text)) {
             say_point(*done, k, angles.size(), true);
             previous.reset();
             const bool next_needs_it =
                 n + 1 < mine.size() &&
                 !finished_point(o.out_dir / point_folder_name(angles[mine[n + 1]]),
-                                point_case_text(sweep, angles[mine[n + 1]]));
+                                specs[n + 1].text);
             if (next_needs_it) previous = finished_point_fields(dir, *done, grid);
             b.records.push_back(*done);
             continue;
@@ -86,7 +88,7 @@ BlockResult run_block(const SweepOptions& o, const SweepCase& sweep,
             ran > 0 ? format_duration(elapsed / ran * static_cast<double>(mine.size() - n)) : "?";
         const std::string label = fmt::format("[point {}/{} alpha {:+.2f}, sweep left {}] ", k + 1,
                                               angles.size(), angles[k], left);
-        PointOutcome out = run_sweep_point(sweep, angles[k], grid, o.out_dir,
+        PointOutcome out = run_sweep_point(sweep, angles[k], specs[n], grid, o.out_dir,
                                            previous ? &*previous : nullptr, label);
         ++ran;
         if (out.interrupted) {
@@ -127,13 +129,13 @@ int write_polar(const fs::path& dir, const std::vector<PointRecord>& records,
 
 int run_sweep(const SweepOptions& o, const SweepRanks& ranks) {
     const std::vector<double> angles = parse_sweep_angles(o.alpha, o.down);
-    const CaseSpec base = read_case_file(o.input.case_file, o.input.overrides);
-    SweepCase sweep{fs::absolute(o.input.case_file), o.input.overrides, o.steady_steps,
-                    o.unsteady_time, !o.quiet};
+    SweepCase sweep{read_case_source(fs::absolute(o.input.case_file)), o.input.overrides,
+                    o.steady_steps, o.unsteady_time, !o.quiet};
+    const CaseSpec base = parse_case_source(sweep.source, sweep.overrides);
     sweep.stability_time = o.stability_time;
     if (ranks.is_root()) {
         prepare_output_dir(o.out_dir, base.text, o.force);
-        write_sweep_plan(o.out_dir, {sweep.case_file, sweep.overrides, angles, o.steady_steps,
+        write_sweep_plan(o.out_dir, {sweep.source.path, sweep.overrides, angles, o.steady_steps,
                                      o.unsteady_time, ranks.size()});
     }
     ranks.barrier();
@@ -142,7 +144,7 @@ int run_sweep(const SweepOptions& o, const SweepRanks& ranks) {
         std::vector<PointRecord> records;
         for (double a : angles)
             if (auto r =
-                    finished_point(o.out_dir / point_folder_name(a), point_case_text(sweep, a)))
+                    finished_point(o.out_dir / point_folder_name(a), point_case(sweep, a).text))
                 records.push_back(*r);
         return write_polar(o.out_dir, records, angles);
     }

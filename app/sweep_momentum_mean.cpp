@@ -3,6 +3,7 @@
 #include <algorithm>
 
 #include "postprocess/control_volume.hpp"
+#include "postprocess/time_average.hpp"
 
 namespace veer {
 
@@ -28,19 +29,7 @@ void MomentumLiftSampler::add(double time, double cl) {
 }
 
 std::optional<double> MomentumLiftSampler::mean(double begin, double end) const {
-    double area = 0.0, span = 0.0;
-    for (std::size_t k = 1; k < m_time.size(); ++k) {
-        const double a = std::max(m_time[k - 1], begin), b = std::min(m_time[k], end);
-        if (b <= a) continue;
-        // The linear interpolant between the two samples, integrated over [a, b].
-        const double slope = (m_cl[k] - m_cl[k - 1]) / (m_time[k] - m_time[k - 1]);
-        const double at_a = m_cl[k - 1] + slope * (a - m_time[k - 1]);
-        const double at_b = m_cl[k - 1] + slope * (b - m_time[k - 1]);
-        area += 0.5 * (at_a + at_b) * (b - a);
-        span += b - a;
-    }
-    if (span <= 0.0) return std::nullopt;
-    return area / span;
+    return interval_mean(m_time, m_cl, begin, end);
 }
 
 }  // namespace veer

@@ -5,14 +5,12 @@
 #include <cmath>
 #include <memory>
 
-#include "app/report_csv.hpp"
 #include "app/residual_plateau.hpp"
 #include "app/run_report.hpp"
 #include "app/simulation.hpp"
 #include "app/sweep_angles.hpp"
 #include "app/sweep_momentum_mean.hpp"
 #include "app/sweep_stability.hpp"
-#include "app/sweep_unsteady_stats.hpp"
 #include "io/case_file.hpp"
 #include "io/checkpoint.hpp"
 #include "io/json_writer.hpp"
@@ -25,31 +23,11 @@ namespace veer {
 namespace {
 namespace fs = std::filesystem;
 
-constexpr double trailing_edge_zone = 0.95;  // x/c aft of which a separation is the TE's own
 constexpr long unsteady_step_guard = 1000000;
 
-const char* status_word(RunStatus s) {
-    switch (s) {
-        case RunStatus::converged:
-            return "converged";
-        case RunStatus::step_cap:
-            return "step cap";
-        case RunStatus::end_time:
-            return "end time";
-        case RunStatus::interrupted:
-            return "interrupted";
-        case RunStatus::diverged:
-            return "diverged";
-    }
-    return "?";
-}
-
-/// Separation figures of the final fields (the last instant for time-accurate points).
-void add_separation(PointRecord& r, const Simulation& sim) {
-    if (!sim.grid().c_layout()) return;
-    const SurfaceDistribution d =
-        surface_distribution(sim.grid(), sim.metrics(), sim.solver().fields(), sim.spec().flow);
-    const SeparationReport s = find_separation(d);
+/// Separation figures of the analysed final fields (the last instant of time-accurate points).
+void add_separation(PointRecord& r, const RunAnalysis& a) {
+    const SeparationReport& s = a.separation;
     auto first_x = [](const std::vector<SurfaceLocation>& v) {
         return v.empty() ? std::nullopt : std::optional<double>(v.front().x);
     };
@@ -63,22 +41,15 @@ void add_separation(PointRecord& r, const Simulation& sim) {
         if (b.start.x < trailing_edge_zone) r.upper_bubble = true;
 }
 
-/// Control-volume lift on the largest contour, from the run's summary.json (when it has it).
-std::optional<double> momentum_lift(const fs::path& run_dir) {
-    const nlohmann::json s = read_json_file(run_dir / "summary.json");
-    if (!s.contains("cl_momentum")) return std::nullopt;
-    const nlohmann::json& m = s["cl_momentum"];
-    if (m.is_number()) return m.get<double>();
-    if (!m.is_object()) return std::nullopt;
+/// Control-volume lift on the largest contour.
+std::optional<double> momentum_lift(const RunAnalysis& a, const std::vector<double>& distances) {
     std::optional<double> best;
     double largest = -1.0;
-    for (const auto& [key, value] : m.items()) {
-        const double distance = std::strtod(key.c_str(), nullptr);
-        if (value.is_number() && distance > largest) {
-            largest = distance;
-            best = value.get<double>();
+    for (std::size_t k = 0; k < a.routes.size() && k < distances.size(); ++k)
+        if (distances[k] > largest) {
+            largest = distances[k];
+            best = a.routes[k].cl_momentum;
         }
-    }
     return best;
 }
 
@@ -103,14 +74,15 @@ std::string periodicity_note(const ForceRecord& h) {
            " (its averages still hold part of the start-up; a longer --unsteady-time settles it)";
 }
 
-ForceRecord read_force_record(const fs::path& history) {
-    const CsvTable t = CsvTable::read(history);
-    return {t.numbers("time"), t.numbers("cl"), t.numbers("cd"), t.numbers("cm")};
-}
-
 struct RunPiece {
     RunResult result;
     std::unique_ptr<Simulation> sim;
+    std::optional<RunAnalysis> analysis;  ///< of the final fields, when the run finished
+
+    /// The control-volume lift on the largest contour of the final fields.
+    std::optional<double> momentum_lift() const {
+        return analysis ? veer::momentum_lift(*analysis, sim->spec().post.contours) : std::nullopt;
+    }
 };
 
 using StopHook = decltype(SimulationOptions::stop_early);
@@ -129,16 +101,9 @@ RunPiece run_piece(const CaseSpec& spec, const StructuredGrid& grid, const fs::p
     if (start) p.sim->start_from(*start);
     p.result = p.sim->run();
     if (p.result.status != RunStatus::diverged && p.result.status != RunStatus::interrupted)
-        write_run_report(*p.sim, p.result,
-                         sweep.progress ? ClosingTable::print : ClosingTable::omit);
+        p.analysis = write_run_report(*p.sim, p.result,
+                                      sweep.progress ? ClosingTable::print : ClosingTable::omit);
     return p;
-}
-
-/// Whether the upper surface of a steady point has separated ahead of the trailing-edge zone
-/// (the separation-onset criterion of the polar).
-bool upper_surface_separated(const PointRecord& r) {
-    return r.upper_bubble || (r.trailing_edge_separation_upper &&
-                              *r.trailing_edge_separation_upper < trailing_edge_zone);
 }
 
 /// How a time-accurate run of a point starts: from the steady fields of a point that did not
@@ -163,7 +128,7 @@ void run_time_accurate(PointRecord& r, PointOutcome& out, const SweepCase& sweep
     o.push_back(fmt::format("run.steps={}", unsteady_step_guard));
     if (sweep.unsteady_time > 0)
         o.push_back(fmt::format("run.end_time={:.17g}", sweep.unsteady_time));
-    const CaseSpec spec = read_case_file(sweep.case_file, o);
+    const CaseSpec spec = parse_case_source(sweep.source, o);
     auto watch = std::make_shared<TimeAccurateWatch>(from.check_time, from.cl_steady);
     auto sampler = std::make_shared<MomentumLiftSampler>(grid, spec.post.contours);
     auto running = std::make_shared<const Simulation*>(nullptr);
@@ -228,8 +193,8 @@ void run_time_accurate(PointRecord& r, PointOutcome& out, const SweepCase& sweep
     } else {
         if (p.result.status == RunStatus::step_cap)
             r.note += "; the time-accurate run reached the step cap before its end time";
-        r.cl_momentum = momentum_lift(dir / "unsteady");
-        const ForceRecord history = read_force_record(dir / "unsteady" / "history.csv");
+        r.cl_momentum = p.momentum_lift();
+        const ForceRecord& history = p.sim->force_history();
         if (history.time.size() >= 4) {
             const UnsteadyStats st = unsteady_stats(history);
             take_cycle_statistics(r, st);
@@ -244,9 +209,8 @@ void run_time_accurate(PointRecord& r, PointOutcome& out, const SweepCase& sweep
             }
         }
     }
-    if (watch->outcome() == TimeAccurateWatch::Outcome::settled)
-        r.cl_momentum = momentum_lift(dir / "unsteady");
-    add_separation(r, *p.sim);
+    if (watch->outcome() == TimeAccurateWatch::Outcome::settled) r.cl_momentum = p.momentum_lift();
+    if (p.analysis) add_separation(r, *p.analysis);
     out.fields = p.sim->solver().fields();
 }
 
@@ -259,21 +223,20 @@ std::vector<std::string> point_overrides(const SweepCase& sweep, double alpha) {
     return o;
 }
 
-std::string point_case_text(const SweepCase& sweep, double alpha) {
-    return read_case_file(sweep.case_file, point_overrides(sweep, alpha)).text;
+CaseSpec point_case(const SweepCase& sweep, double alpha) {
+    return parse_case_source(sweep.source, point_overrides(sweep, alpha));
 }
 
-PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const StructuredGrid& grid,
-                             const fs::path& sweep_dir, const FlowFields* start,
-                             const std::string& label) {
-    const CaseSpec spec = read_case_file(sweep.case_file, point_overrides(sweep, alpha));
+PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const CaseSpec& spec,
+                             const StructuredGrid& grid, const fs::path& sweep_dir,
+                             const FlowFields* start, const std::string& label) {
     PointRecord r;
     r.alpha = alpha;
     r.folder = point_folder_name(alpha);
     r.case_text = spec.text;
     const fs::path dir = sweep_dir / r.folder;
     PointOutcome out;
-    const bool steady_mode = spec.run.mode == "steady";
+    const bool steady_mode = spec.run.mode == TimeMode::steady;
     StopHook stall_hook;
     std::shared_ptr<ResidualPlateau> plateau;
     if (steady_mode && sweep.plateau.window > 0) {
@@ -320,8 +283,8 @@ PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const Structu
             r.cl = p.result.forces.cl.total;
             r.cd = p.result.forces.cd.total;
             r.cm = p.result.forces.cm.total;
-            r.cl_momentum = momentum_lift(dir);
-            add_separation(r, *p.sim);
+            r.cl_momentum = p.momentum_lift();
+            if (p.analysis) add_separation(r, *p.analysis);
             out.fields = p.sim->solver().fields();
             if (steady_mode && p.result.status == RunStatus::converged &&
                 sweep.stability_time > 0 && upper_surface_separated(r)) {
@@ -332,7 +295,7 @@ PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const Structu
             }
             if (!steady_mode) {
                 // A time-accurate case: every point is averaged like an unsteady one.
-                const ForceRecord history = read_force_record(dir / "history.csv");
+                const ForceRecord& history = p.sim->force_history();
                 if (history.time.size() >= 4) {
                     const UnsteadyStats st = unsteady_stats(history);
                     r.regime = st.periodic ? "unsteady" : "steady";
@@ -356,12 +319,11 @@ std::optional<FlowFields> finished_point_fields(const fs::path& point_dir,
         if (c.grid.ni() != grid.ni() || c.grid.nj() != grid.nj()) return std::nullopt;
         const CaseSpec spec = parse_case_text(c.case_text, (run_dir / "checkpoint.h5").string(),
                                               run_dir, {}, FileCheck::skip);
-        FlowSolver solver(grid, spec.flow, solver_settings_for(spec));
-        std::vector<NamedArray> state;
-        for (const NamedArray& a : c.arrays)
-            if (a.name != "simulation_convergence") state.push_back(a);
-        solver.restore(state);
-        return solver.fields();
+        SimulationOptions quiet;
+        quiet.progress = false;
+        Simulation finished(spec, grid, run_dir, quiet);
+        finished.resume(c);
+        return finished.solver().fields();
     } catch (const std::exception&) {
         return std::nullopt;  // the next point starts from the free stream instead
     }

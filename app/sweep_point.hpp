@@ -10,6 +10,7 @@
 
 #include "app/residual_plateau.hpp"
 #include "app/sweep_record.hpp"
+#include "io/case_file.hpp"
 #include "mesh/structured_grid.hpp"
 #include "solver/flow_fields.hpp"
 
@@ -17,7 +18,7 @@ namespace veer {
 
 /// What every point of a sweep shares.
 struct SweepCase {
-    std::filesystem::path case_file;
+    CaseSource source;                   ///< the case file, read once (read_case_source)
     std::vector<std::string> overrides;  ///< the user's --set items
     long steady_steps = 0;               ///< > 0: the step cap of the steady attempt
     double unsteady_time = 0.0;          ///< > 0: the end time of a time-accurate point
@@ -34,8 +35,8 @@ struct SweepCase {
 /// The overrides of the steady attempt at `alpha` (the user's, then the sweep's).
 std::vector<std::string> point_overrides(const SweepCase& sweep, double alpha);
 
-/// The case text of the steady attempt at `alpha`, which identifies a finished point.
-std::string point_case_text(const SweepCase& sweep, double alpha);
+/// The case of the steady attempt at `alpha`; its text identifies a finished point.
+CaseSpec point_case(const SweepCase& sweep, double alpha);
 
 /// How a point ended.
 struct PointOutcome {
@@ -44,11 +45,13 @@ struct PointOutcome {
     bool interrupted = false;
 };
 
-/// Runs the point at `alpha` on `grid` in `sweep_dir / point_folder_name(alpha)`, from `start`
-/// (the free stream when null); writes the normal run outputs and the point record.
-PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const StructuredGrid& grid,
-                             const std::filesystem::path& sweep_dir, const FlowFields* start,
-                             const std::string& label);
+/// Runs the point at `alpha`, whose case is `spec` (point_case), on `grid` in
+/// `sweep_dir / point_folder_name(alpha)`, from `start` (the free stream when null); writes the
+/// normal run outputs and the point record. The point keeps its case and results in memory: no
+/// file is read back.
+PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const CaseSpec& spec,
+                             const StructuredGrid& grid, const std::filesystem::path& sweep_dir,
+                             const FlowFields* start, const std::string& label);
 
 /// The final fields of a finished point, read back from its checkpoint (to continue a sweep
 /// after an interruption); nullopt when they cannot be read on `grid`.

@@ -19,6 +19,11 @@ std::optional<double> read_optional(const nlohmann::json& j, const char* key) {
 
 }  // namespace
 
+bool upper_surface_separated(const PointRecord& r) {
+    return r.upper_bubble || (r.trailing_edge_separation_upper &&
+                              *r.trailing_edge_separation_upper < trailing_edge_zone);
+}
+
 nlohmann::json record_to_json(const PointRecord& r) {
     return {
         {"alpha", r.alpha},

@@ -33,6 +33,15 @@ struct PointRecord {
     std::string case_text;  ///< the steady point's case text: same text, same point
 };
 
+/// x/c aft of which a separation of the upper surface is the trailing edge's own and does not
+/// count as separation onset.
+constexpr double trailing_edge_zone = 0.95;
+
+/// Whether the upper surface of a point has separated ahead of the trailing-edge zone (a bubble
+/// there, or reversed flow from ahead of it to the trailing edge): the separation-onset
+/// criterion of the polar, and what makes a sweep check a converged point's stability.
+bool upper_surface_separated(const PointRecord& r);
+
 nlohmann::json record_to_json(const PointRecord& r);
 /// Throws InputError naming `source` when a key is missing or of the wrong type.
 PointRecord record_from_json(const nlohmann::json& j, const std::string& source);

@@ -11,8 +11,8 @@
 #include <deque>
 #include <vector>
 
-#include "app/sweep_unsteady_stats.hpp"
 #include "mesh/grid_metrics.hpp"
+#include "postprocess/time_average.hpp"
 #include "solver/flow_fields.hpp"
 
 namespace veer {

@@ -9,7 +9,9 @@
 #include <set>
 #include <sstream>
 
+#include "io/case_choices.hpp"
 #include "mesh/errors.hpp"
+#include "solver/model_registry.hpp"
 
 namespace veer {
 namespace {
@@ -60,6 +62,13 @@ public:
         std::string v = n->as_string()->get();
         if (!choices.empty() && !choices.count(v)) fail(*n, key, "\"" + v + "\"", allowed);
         return v;
+    }
+
+    /// The word a choice key holds (io/case_choices.hpp), checked against the key's words.
+    std::optional<std::string> choice(const std::string& table, const std::string& key) {
+        const std::vector<std::string> words = choice_words(table, key);
+        VEER_VERIFY(!words.empty(), "[" + table + "] " + key + " is not a choice key");
+        return text(key, {words.begin(), words.end()}, quoted_choices(words));
     }
 
     std::optional<std::vector<double>> numbers(const std::string& key, double lo, double hi,
@@ -144,11 +153,10 @@ void read_geometry(const toml::table* t, const std::string& source, const fs_pat
     TableReader r(t, "geometry", source);
     const auto naca = r.text("naca", {}, "four or five digits, e.g. \"0012\" or \"23012\"");
     const auto file = r.text("coordinates", {}, "the path of a two-column x y file");
-    const auto te = r.text("trailing_edge", {"open", "closed"}, "\"open\" or \"closed\"");
+    const auto te = r.choice("geometry", "trailing_edge");
     const auto circle = r.flag("circle", "true (a circular cylinder of diameter 1)");
     const auto name = r.text("name", {}, "a label");
-    const auto chord = r.text("chord_line", {"auto", "file-axes", "nose-to-tail"},
-                              "\"auto\", \"file-axes\" or \"nose-to-tail\"");
+    const auto chord = r.choice("geometry", "chord_line");
     r.reject_unknown("naca, coordinates, circle, trailing_edge, chord_line, name");
     if (circle && !*circle)
         r.fail(*t->get("circle"), "circle", "false",
@@ -189,12 +197,11 @@ void read_geometry(const toml::table* t, const std::string& source, const fs_pat
         r.fail(*t->get("trailing_edge"), "trailing_edge", "\"" + *te + "\"",
                "trailing_edge only with naca (a coordinate file's trailing edge is closed by "
                "veer)");
-    c.geometry.closed_trailing_edge = te && *te == "closed";
+    if (te) c.geometry.trailing_edge = trailing_edge_of(*te);
     if (chord && naca)
         r.fail(*t->get("chord_line"), "chord_line", "\"" + *chord + "\"",
                "chord_line only with coordinates (a NACA section keeps its analytic chord line)");
-    if (chord && *chord == "file-axes") c.geometry.chord_line = ChordLineChoice::file_axes;
-    if (chord && *chord == "nose-to-tail") c.geometry.chord_line = ChordLineChoice::nose_to_tail;
+    if (chord) c.geometry.chord_line = chord_line_of(*chord);
     c.geometry.name = name ? *name : (naca ? "NACA " + *naca : p_stem(c.geometry.coordinates));
 }
 
@@ -235,17 +242,14 @@ void read_flow(const toml::table* t, const std::string& source, CaseSpec& c) {
     if (c.geometry.circle && c.flow.alpha_deg != 0.0)
         r.fail(*t->get("alpha"), "alpha", fmt::format("{}", c.flow.alpha_deg),
                "0 with circle = true (a circle has no angle of attack: the flow runs along +x)");
-    c.model =
-        r.text("model", {"laminar", "spalart-allmaras"}, "\"laminar\" or \"spalart-allmaras\"")
-            .value_or("laminar");
+    if (const auto model = r.choice("flow", "model")) c.model = model_named(*model);
     r.reject_unknown("reynolds, alpha, model");
 }
 
 void read_run(const toml::table* t, const std::string& source, CaseSpec& c) {
     TableReader r(t, "run", source);
     RunSpec& run = c.run;
-    run.mode =
-        r.text("mode", {"steady", "unsteady"}, "\"steady\" or \"unsteady\"").value_or(run.mode);
+    if (const auto mode = r.choice("run", "mode")) run.mode = mode_of(*mode);
     run.steps =
         r.integer("steps", 1, 100000000, "an iteration cap from 1 to 1e8").value_or(run.steps);
     run.end_time = r.number("end_time", 1e-6, 1e6, "a time from 1e-6 to 1e6 (chord / speed)")
@@ -261,9 +265,8 @@ void read_run(const toml::table* t, const std::string& source, CaseSpec& c) {
             .value_or(run.output_every);
     run.checkpoint_every = r.integer("checkpoint_every", 1, 100000000, "a step interval from 1")
                                .value_or(run.checkpoint_every);
-    run.pressure_solver = r.text("pressure_solver", {"multigrid", "eigen-cg", "eigen-bicgstab"},
-                                 "\"multigrid\", \"eigen-cg\" or \"eigen-bicgstab\"")
-                              .value_or(run.pressure_solver);
+    if (const auto solver = r.choice("run", "pressure_solver"))
+        run.pressure_solver = pressure_solver_of(*solver);
     const auto spin = r.number("start_spin", 0.0, 2.0, "a surface speed from 0 to 2");
     r.reject_unknown(
         "mode, steps, end_time, cfl, residual_drop, force_tolerance, output_every, "
@@ -271,10 +274,18 @@ void read_run(const toml::table* t, const std::string& source, CaseSpec& c) {
     if (spin && *spin > 0.0 && !c.geometry.circle)
         r.fail(*t->get("start_spin"), "start_spin", fmt::format("{}", *spin),
                "0 unless [geometry] circle = true (only a circle can spin in place)");
-    if (spin && *spin > 0.0 && run.mode != "unsteady")
+    if (spin && *spin > 0.0 && run.mode != TimeMode::time_accurate)
         r.fail(*t->get("start_spin"), "start_spin", fmt::format("{}", *spin),
                "0 unless mode = \"unsteady\" (the spin starts a time-accurate run)");
     run.start_spin = spin.value_or(0.0);
+    // Steady runs smooth the pressure with a coefficient that needs a pseudo CFL number above
+    // rhie_chow_scale / 2 (solver/README.md, "Projection"); the solver refuses smaller ones.
+    const double smallest = 0.5 * SolverSettings{}.rhie_chow_scale;
+    if (run.mode == TimeMode::steady && run.cfl > 0.0 && run.cfl <= smallest)
+        r.fail(*t->get("cfl"), "cfl", fmt::format("{}", run.cfl),
+               fmt::format("0 (the model's default) or above {:g} in steady mode (the pressure "
+                           "smoothing of the steady iteration needs it)",
+                           smallest));
 }
 
 void read_post(const toml::table* t, const std::string& source, CaseSpec& c) {
@@ -311,7 +322,7 @@ void apply_overrides(toml::table& root, const std::vector<std::string>& override
         }
         if (!root.contains(table)) root.insert(table, toml::table{});
         toml::table* t = root.get(table)->as_table();
-        if (!t) throw InputError("--set " + o + ": '" + table + "' is not a table");
+        if (!t) throw InputError(fmt::format("--set {}: '{}' is not a table", o, table));
         t->insert_or_assign(key, *parsed.get("v"));
     }
 }
@@ -355,22 +366,31 @@ CaseSpec parse_case_text(const std::string& text, const std::string& source,
     read_flow(flow, source, c);
     read_run(sub_table(root, "run", source), source, c);
     read_post(sub_table(root, "post", source), source, c);
-    if (c.y_plus == std::nullopt && c.model == "spalart-allmaras" &&
+    if (c.y_plus == std::nullopt && c.model.default_y_plus &&
         !(sub_table(root, "mesh", source) &&
           sub_table(root, "mesh", source)->contains("first_cell")))
-        c.y_plus = 1.0;  // turbulent default: first cell at y+ = 1 (common practice)
+        c.y_plus = c.model.default_y_plus;  // wall-resolved models: the first cell from y+
+    return c;
+}
+
+CaseSource read_case_source(const std::filesystem::path& path) {
+    std::ifstream in(path, std::ios::binary);
+    if (!in) throw InputError(path.string() + ": cannot open the case file");
+    std::ostringstream s;
+    s << in.rdbuf();
+    return {path, s.str()};
+}
+
+CaseSpec parse_case_source(const CaseSource& source, const std::vector<std::string>& overrides) {
+    CaseSpec c =
+        parse_case_text(source.text, source.path.string(), source.path.parent_path(), overrides);
+    c.path = source.path;
     return c;
 }
 
 CaseSpec read_case_file(const std::filesystem::path& path,
                         const std::vector<std::string>& overrides) {
-    std::ifstream in(path, std::ios::binary);
-    if (!in) throw InputError(path.string() + ": cannot open the case file");
-    std::ostringstream s;
-    s << in.rdbuf();
-    CaseSpec c = parse_case_text(s.str(), path.string(), path.parent_path(), overrides);
-    c.path = path;
-    return c;
+    return parse_case_source(read_case_source(path), overrides);
 }
 
 }  // namespace veer

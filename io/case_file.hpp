@@ -9,6 +9,19 @@
 
 namespace veer {
 
+/// A case file's text, read once, and where it came from.
+struct CaseSource {
+    std::filesystem::path path;
+    std::string text;
+};
+
+/// Reads the text of the case file `path`. Throws InputError naming it when it cannot be read.
+CaseSource read_case_source(const std::filesystem::path& path);
+
+/// The case of `source` with `overrides` applied (read_case_file without reading the file
+/// again: a sweep derives each point's case from the text it read once).
+CaseSpec parse_case_source(const CaseSource& source, const std::vector<std::string>& overrides);
+
 /// Reads `path`, applies `overrides` ("table.key=value", the value in TOML syntax, e.g.
 /// "flow.alpha=6" or "geometry.naca=\"4412\"") and validates the result. Throws InputError.
 CaseSpec read_case_file(const std::filesystem::path& path,

@@ -1,13 +1,19 @@
 #pragma once
-/// A study as the case file describes it: geometry, grid, flow, run and post-processing settings.
+/// A study as the case file describes it: geometry, grid, flow, run and post-processing settings,
+/// every choice typed (the words are read once, io/case_choices.hpp).
 #include <filesystem>
 #include <optional>
 #include <string>
 #include <vector>
 
 #include "mesh/cgrid_spec.hpp"
+#include "mesh/naca.hpp"
 #include "mesh/section.hpp"
 #include "solver/flow_fields.hpp"
+#include "solver/flow_model.hpp"
+#include "solver/laminar_model.hpp"
+#include "solver/pressure_solver.hpp"
+#include "solver/solver_settings.hpp"
 
 namespace veer {
 
@@ -15,7 +21,7 @@ namespace veer {
 struct GeometrySpec {
     std::string naca;                   ///< e.g. "0012", "23012"; empty when a file is used
     std::filesystem::path coordinates;  ///< resolved against the case file's folder
-    bool closed_trailing_edge = false;  ///< NACA only: the closed-TE thickness variant
+    TrailingEdge trailing_edge = TrailingEdge::open;  ///< NACA only: the thickness variant
     /// A circular cylinder of diameter 1, meshed as an O-grid; the diameter is the reference
     /// length in place of the chord (Reynolds number, coefficients, distances).
     bool circle = false;
@@ -26,7 +32,8 @@ struct GeometrySpec {
 
 /// [run]: how the solution is marched and written.
 struct RunSpec {
-    std::string mode = "steady";    ///< "steady" (pseudo-time to convergence) or "unsteady"
+    /// "steady" (pseudo-time marching to convergence) or "unsteady" (time-accurate)
+    TimeMode mode = TimeMode::steady;
     long steps = 20000;             ///< iteration cap
     double end_time = 20.0;         ///< unsteady: chord / free-stream-speed units
     double cfl = 0.0;               ///< 0: the solver's default for the mode
@@ -34,7 +41,7 @@ struct RunSpec {
     double force_tolerance = 1e-5;  ///< steady: Cl, Cd change per 100 steps below this
     long output_every = 0;          ///< field frame interval in steps; 0: first and last only
     long checkpoint_every = 500;    ///< checkpoint interval in steps
-    std::string pressure_solver = "multigrid";  ///< "multigrid", "eigen-cg", "eigen-bicgstab"
+    PressureSolverKind pressure_solver = PressureSolverKind::multigrid;
     /// Circle, unsteady: surface speed (free-stream units) of a brief counter-clockwise spin of
     /// the body at the start, start_spin sin(pi t / 2) for 0 < t < 2, which breaks the symmetry
     /// of the start so that shedding begins within a few cycles (0: none).
@@ -55,7 +62,7 @@ struct CaseSpec {
     CGridSpec mesh;
     std::optional<double> y_plus;  ///< set when [mesh] y_plus chose the first cell
     FlowConditions flow;
-    std::string model = "laminar";  ///< "laminar" or "spalart-allmaras"
+    ModelDescriptor model = laminar_descriptor();  ///< [flow] model, from the model registry
     RunSpec run;
     PostSpec post;
 };

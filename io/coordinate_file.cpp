@@ -1,5 +1,7 @@
 #include "io/coordinate_file.hpp"
 
+#include <fmt/format.h>
+
 #include <charconv>
 #include <cmath>
 #include <fstream>
@@ -79,8 +81,8 @@ RawOutline read_coordinate_file(const std::filesystem::path& path) {
                 had_title = true;
                 continue;
             }
-            throw InputError(name + ":" + std::to_string(number) +
-                             ": expected two numbers \"x y\", found \"" + text + "\"");
+            throw InputError(fmt::format("{}:{}: expected two numbers \"x y\", found \"{}\"", name,
+                                         number, text));
         }
         title_allowed = false;
         if (gap) b.blocks.emplace_back();

@@ -112,12 +112,12 @@ fs::path FieldSeries::write_frame(double time, const StructuredGrid& grid,
                                   {"Cp", 1, &cp},
                                   {"vorticity", 1, &vorticity}};
     if (!flow.eddy_viscosity.empty()) arrays.push_back({"eddy_viscosity", 1, &flow.eddy_viscosity});
-    if (!flow.nu_tilde.empty()) arrays.push_back({"nu_tilde", 1, &flow.nu_tilde});
+    for (const NamedArray& a : flow.model_fields) arrays.push_back({a.name, 1, &a.values});
     arrays.insert(arrays.end(), extra.begin(), extra.end());
 
     char name[32];
     std::snprintf(name, sizeof name, "fields_%06d.vts", next_number());
-    const fs::path frame = m_dir / name;
+    fs::path frame = m_dir / name;
     write_grid_vts(frame, grid, arrays, {}, time);
     m_frames.push_back({time, name});
     write_pvd();

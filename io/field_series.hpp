@@ -36,8 +36,9 @@ public:
 
     /// Writes frame fields_NNNNNN.vts (NNNNNN = one more than the highest number listed) with cell
     /// arrays velocity (u, v, 0), pressure (p - p_inf), Cp = 2 (p - p_inf) (rho = U_inf = 1),
-    /// vorticity (Green-Gauss, postprocess/vorticity.hpp), eddy_viscosity and nu_tilde when
-    /// `flow` holds them, then `extra` (ni * nj values each); then rewrites fields.pvd. Frames
+    /// vorticity (Green-Gauss, postprocess/vorticity.hpp), eddy_viscosity when `flow` holds it,
+    /// the model's fields under their names, then `extra` (ni * nj values each); then rewrites
+    /// fields.pvd. Frames
     /// listed at or after `time` are dropped first, so the list stays increasing in time.
     /// Returns the frame's path.
     std::filesystem::path write_frame(double time, const StructuredGrid& grid,

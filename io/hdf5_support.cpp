@@ -234,6 +234,7 @@ void write_strings(hid_t parent, const std::string& name, const std::vector<std:
              H5Dclose, "dataset '" + name + "'");
     if (values.empty()) return;
     std::vector<const char*> c;
+    c.reserve(values.size());
     for (const std::string& s : values) c.push_back(s.c_str());
     check_status(H5Dwrite(d.get(), t.get(), H5S_ALL, H5S_ALL, H5P_DEFAULT, c.data()),
                  "dataset '" + name + "'");

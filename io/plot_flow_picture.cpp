@@ -58,7 +58,9 @@ void paint_field(Canvas& cv, const ImageGrid& g, FlowBackground b, const Scale& 
             const std::size_t k = g.at(i, j);
             const Colour c = g.fluid[k] ? field_colour(s.fraction(background_value(g, k, b)))
                                         : Colour{0.85, 0.85, 0.85};
-            auto* px = reinterpret_cast<std::uint32_t*>(data + j * stride) + i;
+            auto* px =
+                reinterpret_cast<std::uint32_t*>(data + static_cast<std::ptrdiff_t>(j) * stride) +
+                i;
             *px = (static_cast<std::uint32_t>(c.r * 255) << 16) |
                   (static_cast<std::uint32_t>(c.g * 255) << 8) |
                   static_cast<std::uint32_t>(c.b * 255);

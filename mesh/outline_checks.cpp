@@ -7,6 +7,7 @@
 #include <sstream>
 
 #include "mesh/errors.hpp"
+#include "mesh/segment_distance.hpp"
 
 namespace veer {
 
@@ -24,13 +25,6 @@ double outline_size(const std::vector<Vec2>& p) {
     double size = 0.0;
     for (const Vec2& q : p) size = std::max(size, norm(q - te));
     return size;
-}
-
-double point_segment_distance(Vec2 p, Vec2 a, Vec2 b) {
-    const Vec2 ab = b - a;
-    const double len2 = dot(ab, ab);
-    const double t = len2 > 0.0 ? std::clamp(dot(p - a, ab) / len2, 0.0, 1.0) : 0.0;
-    return norm(p - (a + t * ab));
 }
 
 /// Distance between segments ab and cd: zero where they cross properly.

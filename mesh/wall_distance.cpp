@@ -69,13 +69,6 @@ double distance_to_runs(Vec2 p, const std::vector<Segment>& segs, const std::vec
 
 }  // namespace
 
-double point_segment_distance(Vec2 p, Vec2 a, Vec2 b) {
-    const Vec2 ab = b - a;
-    const double len2 = dot(ab, ab);
-    const double t = len2 > 0.0 ? std::clamp(dot(p - a, ab) / len2, 0.0, 1.0) : 0.0;
-    return norm(p - (a + t * ab));
-}
-
 std::vector<double> wall_distance(const StructuredGrid& grid, const GridMetrics& metrics) {
     const std::vector<Segment> segs = wall_segments(grid);
     // Runs of about sqrt(n) faces balance the box tests against the segment tests.

@@ -3,6 +3,7 @@
 #include <vector>
 
 #include "mesh/grid_metrics.hpp"
+#include "mesh/segment_distance.hpp"
 #include "mesh/structured_grid.hpp"
 
 namespace veer {
@@ -13,8 +14,5 @@ namespace veer {
 /// and a run is opened only when its box is nearer than the best distance so far, so the cost is
 /// close to linear in the cell count. Throws InputError when the grid has no wall segment.
 std::vector<double> wall_distance(const StructuredGrid& grid, const GridMetrics& metrics);
-
-/// Distance (chords) from point p to the segment ab.
-double point_segment_distance(Vec2 p, Vec2 a, Vec2 b);
 
 }  // namespace veer

@@ -1,5 +1,8 @@
 #include "postprocess/lift_routes.hpp"
 
+#include <algorithm>
+#include <cmath>
+
 namespace veer {
 
 std::vector<RouteComparison> compare_routes(const SurfaceForces& surface,
@@ -25,6 +28,13 @@ std::vector<RouteComparison> compare_routes(const SurfaceForces& surface,
         out.push_back(r);
     }
     return out;
+}
+
+double largest_lift_disagreement(const std::vector<RouteComparison>& routes) {
+    double worst = 0.0;
+    for (const RouteComparison& r : routes)
+        worst = std::max(worst, std::abs(r.cl_momentum_difference));
+    return worst;
 }
 
 }  // namespace veer

@@ -25,4 +25,8 @@ std::vector<RouteComparison> compare_routes(const SurfaceForces& surface,
                                             const std::vector<ContourForces>& momentum,
                                             const std::vector<ContourCirculation>& circulation);
 
+/// The largest |cl_momentum - surface cl| over the contours (0 without contours): the error
+/// indicator printed with every run.
+double largest_lift_disagreement(const std::vector<RouteComparison>& routes);
+
 }  // namespace veer

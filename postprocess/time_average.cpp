@@ -49,6 +49,14 @@ double value_at(const std::vector<double>& t, const std::vector<double>& f, std:
 
 }  // namespace
 
+double signal_at(const std::vector<double>& t, const std::vector<double>& f, double at) {
+    if (at <= t.front()) return f.front();
+    if (at >= t.back()) return f.back();
+    const std::size_t k =
+        static_cast<std::size_t>(std::upper_bound(t.begin(), t.end(), at) - t.begin()) - 1;
+    return value_at(t, f, k, at);
+}
+
 std::vector<double> upward_crossings(const std::vector<double>& time,
                                      const std::vector<double>& signal, double level, double band) {
     VEER_VERIFY(time.size() == signal.size(), "time and signal differ in length");
@@ -95,20 +103,43 @@ std::optional<CycleWindow> last_whole_cycles(const std::vector<double>& time,
     return CycleWindow{c[c.size() - 1 - static_cast<std::size_t>(n)], c.back(), n};
 }
 
+std::optional<double> interval_mean(const std::vector<double>& t, const std::vector<double>& f,
+                                    double begin, double end) {
+    VEER_VERIFY(t.size() == f.size(), "time and signal differ in length");
+    if (t.size() < 2) return std::nullopt;
+    const double from = std::max(begin, t.front()), to = std::min(end, t.back());
+    if (!(to > from)) return std::nullopt;
+    double integral = 0.0;
+    // Start at the sample interval holding `from` (times increase).
+    const auto first = std::upper_bound(t.begin(), t.end(), from);
+    const std::size_t k0 = first == t.begin() ? 0 : static_cast<std::size_t>(first - t.begin()) - 1;
+    for (std::size_t k = k0; k + 1 < t.size() && t[k] < to; ++k) {
+        const double a = std::max(t[k], from), b = std::min(t[k + 1], to);
+        if (b <= a) continue;
+        integral += 0.5 * (b - a) * (value_at(t, f, k, a) + value_at(t, f, k, b));
+    }
+    return integral / (to - from);
+}
+
 double window_average(const std::vector<double>& t, const std::vector<double>& f,
                       const CycleWindow& w) {
     VEER_VERIFY(t.size() == f.size() && t.size() >= 2, "window average needs two samples");
     VEER_VERIFY(w.end > w.begin, "empty averaging window");
-    double integral = 0.0;
-    // Start at the sample interval holding w.begin (times increase).
-    const auto first = std::upper_bound(t.begin(), t.end(), w.begin);
-    const std::size_t k0 = first == t.begin() ? 0 : static_cast<std::size_t>(first - t.begin()) - 1;
-    for (std::size_t k = k0; k + 1 < t.size() && t[k] < w.end; ++k) {
-        const double a = std::max(t[k], w.begin), b = std::min(t[k + 1], w.end);
-        if (b <= a) continue;
-        integral += 0.5 * (b - a) * (value_at(t, f, k, a) + value_at(t, f, k, b));
-    }
-    return integral / (w.end - w.begin);
+    const std::optional<double> mean = interval_mean(t, f, w.begin, w.end);
+    VEER_VERIFY(mean.has_value(), "averaging window outside the record");
+    return *mean;
+}
+
+double half_range(const std::vector<double>& t, const std::vector<double>& f, double begin,
+                  double end) {
+    VEER_VERIFY(t.size() == f.size() && !t.empty(), "half range needs samples");
+    double lo = signal_at(t, f, begin), hi = lo;
+    for (std::size_t k = 0; k < t.size(); ++k)
+        if (t[k] >= begin && t[k] <= end) {
+            lo = std::min(lo, f[k]);
+            hi = std::max(hi, f[k]);
+        }
+    return 0.5 * (hi - lo);
 }
 
 }  // namespace veer

@@ -1,12 +1,16 @@
 #pragma once
-/// Time averages of time-accurate runs: whole-cycle detection from a lift signal, averages of
-/// scalar histories over whole cycles, and running means of the fields per cycle.
+/// Time averages of time-accurate runs, in one place: whole-cycle detection from a lift signal,
+/// means and half ranges of sampled signals over a window, the statistics of a force history
+/// (the run summary and the sweep records report the same figures), the spectral peak of the
+/// lift, and running means of the fields per cycle.
 ///
 /// Cycles start at upward crossings of the signal's level, with hysteresis: after one crossing
 /// the signal must fall below level - band (band = half the signal's standard deviation) before
-/// the next counts. Crossing times are interpolated linearly between samples. The level and band
-/// come from the second half of the record (offline, and online until two crossings are seen);
-/// online they are then fixed at each crossing to those of the kept whole cycles.
+/// the next counts. Crossing times are interpolated linearly between samples. For a force
+/// history (unsteady_stats) the first half of the record is the start-up transient: level and
+/// band are the time mean and standard deviation of the second half, and only its crossings
+/// count. Online (CycleAverager) level and band come from the second half of the record until
+/// two crossings are seen, and are then fixed at each crossing to those of the kept cycles.
 ///
 /// What to average how: quantities linear in the fields (surface forces, Cp, Cf, circulation,
 /// wake v profiles) can be evaluated on mean fields; the control-volume route is quadratic in the
@@ -38,9 +42,53 @@ std::vector<double> upward_crossings(const std::vector<double>& time,
 std::optional<CycleWindow> last_whole_cycles(const std::vector<double>& time,
                                              const std::vector<double>& signal, int max_cycles);
 
-/// Mean of a sampled signal over [window.begin, window.end] (trapezoidal, ends interpolated).
-double window_average(const std::vector<double>& time, const std::vector<double>& signal,
-                      const CycleWindow& window);
+/// The linear interpolant of a sampled signal (times t, values f) at `at`, held constant beyond the
+/// record's ends.
+double signal_at(const std::vector<double>& t, const std::vector<double>& f, double at);
+
+/// Mean over [begin, end] of the linear interpolant of a sampled signal (trapezoidal, ends
+/// interpolated), taken over the part of the window the samples cover; nullopt where they cover
+/// none of it.
+std::optional<double> interval_mean(const std::vector<double>& t, const std::vector<double>& f,
+                                    double begin, double end);
+
+/// Mean of a sampled signal over [w.begin, w.end] (interval_mean of a window inside the record).
+double window_average(const std::vector<double>& t, const std::vector<double>& f,
+                      const CycleWindow& w);
+
+/// Half the peak-to-peak excursion of the samples in [begin, end] and the signal at begin.
+double half_range(const std::vector<double>& t, const std::vector<double>& f, double begin,
+                  double end);
+
+/// A sampled force history (time in chord / U_inf).
+struct ForceRecord {
+    std::vector<double> time, cl, cd, cm;
+};
+
+/// What the force history of a time-accurate run shows (see above for the windows).
+struct UnsteadyStats {
+    bool periodic = false;  ///< whole cycles were found; otherwise the flow settled (or did not
+                            ///< complete a cycle) and the averages are over the second half
+    int cycles = 0;
+    double window_begin = 0.0, window_end = 0.0;
+    double cl_mean = 0.0, cd_mean = 0.0, cm_mean = 0.0;
+    /// Half the peak-to-peak excursion over the window.
+    double cl_amplitude = 0.0, cd_amplitude = 0.0, cm_amplitude = 0.0;
+    std::optional<double> strouhal;  ///< f c / U_inf of the lift's spectral peak
+    /// Mean length of the whole cycles (periodic records).
+    double period() const { return cycles > 0 ? (window_end - window_begin) / cycles : 0.0; }
+};
+
+/// The statistics of a record (see above). Needs at least 4 samples.
+UnsteadyStats unsteady_stats(const ForceRecord& record);
+
+/// Frequency (1 / time unit) of the largest peak of the spectrum of `signal` over
+/// [begin, end]: the signal is resampled uniformly, its mean removed, a Hann window applied,
+/// the peak bin found and refined by maximising |DFT(f)| between its neighbours. nullopt when
+/// the window holds fewer than 8 samples or no variation.
+std::optional<double> dominant_frequency(const std::vector<double>& time,
+                                         const std::vector<double>& signal, double begin,
+                                         double end);
 
 /// (q(end) - q(begin)) / (end - begin), q interpolated linearly between samples: the window
 /// mean of dq/dt (for the rate-of-change term of the control-volume route).

@@ -46,6 +46,28 @@ void fill_increment_ghosts(const std::vector<BoundaryFace>& faces, const Connect
     fill_connected_ghosts(c, phi);
 }
 
+std::vector<ScalarFaceCondition> scalar_face_conditions(const std::vector<BoundaryFace>& faces,
+                                                        const ScalarColumn& column) {
+    std::vector<ScalarFaceCondition> out(faces.size());
+    for (std::size_t k = 0; k < faces.size(); ++k) {
+        const ScalarCondition& c = column.on(faces[k].role);
+        out[k].dirichlet = c.kind == Condition::dirichlet;
+        out[k].value = c.value_at ? c.value_at(faces[k].center) : c.value;
+    }
+    return out;
+}
+
+void fill_scalar_ghosts(const std::vector<BoundaryFace>& faces,
+                        const std::vector<ScalarFaceCondition>& conditions, const Connectivity& c,
+                        CellView q) {
+    for (std::size_t k = 0; k < faces.size(); ++k) {
+        const BoundaryFace& f = faces[k];
+        const double qp = q(f.i, f.j);
+        set_ghosts(f, q, conditions[k].dirichlet ? 2.0 * conditions[k].value - qp : qp);
+    }
+    fill_connected_ghosts(c, q);
+}
+
 void fill_copy_ghosts(const std::vector<BoundaryFace>& faces, const Connectivity& c, CellView q) {
     for (const BoundaryFace& f : faces) set_ghosts(f, q, q(f.i, f.j));
     fill_connected_ghosts(c, q);

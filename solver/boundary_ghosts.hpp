@@ -25,6 +25,22 @@ void fill_pressure_ghosts(const std::vector<BoundaryFace>& faces, const Connecti
 void fill_increment_ghosts(const std::vector<BoundaryFace>& faces, const Connectivity& c,
                            CellView phi);
 
+/// The condition of a model variable on one physical face (same order as the faces).
+struct ScalarFaceCondition {
+    bool dirichlet = true;
+    double value = 0.0;  ///< boundary value where Dirichlet
+};
+
+/// The conditions of a model variable's column (boundary_table.hpp) on every physical face.
+std::vector<ScalarFaceCondition> scalar_face_conditions(const std::vector<BoundaryFace>& faces,
+                                                        const ScalarColumn& column);
+
+/// Ghosts of a model variable from its face conditions (Dirichlet: 2 q_b - q_P; Neumann: q_P,
+/// both layers), then the connected ghosts.
+void fill_scalar_ghosts(const std::vector<BoundaryFace>& faces,
+                        const std::vector<ScalarFaceCondition>& conditions, const Connectivity& c,
+                        CellView q);
+
 /// Ghosts equal to the interior neighbour on every physical face (for cell gradients, whose
 /// face average is then the interior value), then the connected ghosts.
 void fill_copy_ghosts(const std::vector<BoundaryFace>& faces, const Connectivity& c, CellView q);

@@ -14,6 +14,20 @@ VariableConditions conditions_for(FaceRole role) {
     VEER_VERIFY(false, "unknown face role");
 }
 
+const ScalarCondition& ScalarColumn::on(FaceRole role) const {
+    switch (role) {
+        case FaceRole::wall:
+            return wall;
+        case FaceRole::inflow:
+            return inflow;
+        case FaceRole::outflow:
+            return outflow;
+        case FaceRole::prescribed_velocity:
+            return prescribed_velocity;
+    }
+    VEER_VERIFY(false, "unknown face role");
+}
+
 std::optional<FaceRole> resolve_role(SegmentKind kind, bool free_stream_enters, bool overridden) {
     if (kind == SegmentKind::wake_cut || kind == SegmentKind::periodic) return std::nullopt;
     if (overridden) return FaceRole::prescribed_velocity;

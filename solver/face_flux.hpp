@@ -25,9 +25,9 @@
 
 namespace veer {
 
-/// F*; views must have ghosts filled (grad p ghosts copied).
-void predicted_face_flux(const FaceGeometry& g, CellView u, CellView v, CellView p,
-                         CellView grad_px, CellView grad_py, const std::vector<double>& rc_i,
+/// F*; views must have ghosts filled (gpx, gpy: the cell pressure gradient, ghosts copied).
+void predicted_face_flux(const FaceGeometry& g, CellView u, CellView v, CellView p, CellView gpx,
+                         CellView gpy, const std::vector<double>& rc_i,
                          const std::vector<double>& rc_j, std::vector<double>& flux_i,
                          std::vector<double>& flux_j);
 

@@ -1,11 +1,12 @@
 #include "solver/flow_solver.hpp"
 
 #include <algorithm>
+#include <cctype>
 #include <cmath>
 #include <numbers>
+#include <set>
 #include <sstream>
 
-#include "mesh/wall_distance.hpp"
 #include "solver/boundary_ghosts.hpp"
 #include "solver/face_flux.hpp"
 #include "solver/far_field_vortex.hpp"
@@ -39,6 +40,19 @@ void check_settings(const FlowConditions& c, const SolverSettings& s) {
         fail("vortex_relaxation", s.vortex_relaxation, "in [0, 1]");
 }
 
+/// A model's variable names become checkpoint arrays, VTK arrays and history columns.
+void check_model_variables(const FlowModel& model) {
+    std::set<std::string> seen;
+    for (const ModelVariable& v : model.variables()) {
+        const bool usable =
+            !v.name.empty() && std::all_of(v.name.begin(), v.name.end(), [](char c) {
+                return std::isalnum(static_cast<unsigned char>(c)) != 0 || c == '_';
+            });
+        VEER_VERIFY(usable, "model variable name '" + v.name + "': letters, digits and '_' only");
+        VEER_VERIFY(seen.insert(v.name).second, "model variable '" + v.name + "' given twice");
+    }
+}
+
 }  // namespace
 
 FlowSolverCore::FlowSolverCore(const StructuredGrid& g, const FlowConditions& c,
@@ -56,10 +70,11 @@ FlowSolverCore::FlowSolverCore(const StructuredGrid& g, const FlowConditions& c,
     vortex_active = s.far_field_vortex && grid.c_layout().has_value();
     allocate();
     pressure_solver = make_pressure_solver(s.pressure_solver);
-    if (s.turbulence == TurbulenceModelKind::spalart_allmaras) {
-        // The model keeps pointers to geom, faces and connectivity: members of this heap object.
-        turbulence.emplace<SpalartAllmaras>(geom, faces, connectivity, wall_distance(grid, metrics),
-                                            nu, s.spalart_allmaras);
+    // The model may keep pointers to geom, faces and connectivity: members of this heap object.
+    VEER_VERIFY(static_cast<bool>(s.model.make), "model '" + s.model.name + "' cannot be built");
+    model = s.model.make(ModelSetup{grid, metrics, geom, faces, connectivity, nu});
+    check_model_variables(*model);
+    if (model->has_eddy_viscosity()) {
         eddy_i.assign(geom.i_faces.area.size(), 0.0);
         eddy_j.assign(geom.j_faces.area.size(), 0.0);
     }
@@ -175,9 +190,15 @@ void FlowSolver::initialize(const FlowFields& initial) {
     s.vel.u.set_interior(initial.u);
     s.vel.v.set_interior(initial.v);
     s.pressure.set_interior(initial.pressure);
-    // A sweep's next point starts from the last one's nu_tilde too (where the fields have it).
-    if (auto* sa = std::get_if<SpalartAllmaras>(&s.turbulence); sa && !initial.nu_tilde.empty())
-        sa->set_nu_tilde(initial.nu_tilde);
+    // A sweep's next point starts from the last one's model variables too (those it has).
+    std::vector<NamedArray> carried;
+    for (const ModelVariable& v : s.model->variables())
+        for (const NamedArray& a : initial.model_fields)
+            if (a.name == v.name) carried.push_back(a);
+    for (const NamedArray& a : carried)
+        VEER_VERIFY(a.values.size() == s.geom.volume.size(),
+                    "initial model field '" + a.name + "' does not match the grid");
+    s.model->set_values(carried);
     s.reset_history();
 }
 
@@ -206,13 +227,17 @@ FlowFields FlowSolver::fields() const {
     f.u = m_impl->vel.u.interior();
     f.v = m_impl->vel.v.interior();
     f.pressure = m_impl->pressure.interior();
-    f.eddy_viscosity = eddy_viscosity(m_impl->turbulence, f.u.size());
-    f.nu_tilde = nu_tilde(m_impl->turbulence);
+    f.eddy_viscosity = m_impl->model->eddy_viscosity();
+    f.model_fields = m_impl->model->values();
+    for (NamedArray& a : m_impl->model->output_fields()) f.model_fields.push_back(std::move(a));
     return f;
 }
 
 double FlowSolver::time() const { return m_impl->time; }
 long FlowSolver::step_count() const { return m_impl->steps; }
 double FlowSolver::far_field_circulation() const { return m_impl->circulation; }
+const std::vector<ModelVariable>& FlowSolver::model_variables() const {
+    return m_impl->model->variables();
+}
 
 }  // namespace veer

@@ -10,6 +10,7 @@
 
 #include "mesh/structured_grid.hpp"
 #include "solver/flow_fields.hpp"
+#include "solver/flow_model.hpp"
 #include "solver/named_array.hpp"
 #include "solver/solver_settings.hpp"
 
@@ -31,12 +32,13 @@ struct StepReport {
     int pressure_iterations = 0;
     double pressure_residual = 0.0;  ///< relative residual of the pressure solve
     double circulation = 0.0;        ///< far-field vortex circulation after the step
-    /// Turbulence model: rms over the cells of (nu_tilde_new - nu_tilde) / dt, nu_tilde per time
-    /// unit (0 when laminar), for the convergence monitor.
-    double residual_nu_tilde = 0.0;
+    /// The turbulence model's residuals, one per variable in the order of model_variables()
+    /// (rms over the cells of (q_new - q) / dt; empty when laminar), for the convergence
+    /// monitor.
+    std::vector<double> model_residuals;
     bool finite = true;  ///< every value of u, v, p is finite
     /// The first non-finite value (cells in memory order) when !finite, else the cell with the
-    /// largest momentum residual; variable is "u", "v" or "pressure".
+    /// largest momentum residual; variable is "u", "v", "pressure" or a model variable's name.
     int worst_i = 0;
     int worst_j = 0;
     std::string worst_variable = "u";
@@ -52,9 +54,9 @@ public:
     FlowSolver(const FlowSolver&) = delete;
     FlowSolver& operator=(const FlowSolver&) = delete;
 
-    /// Replaces u, v, p (cell values; and nu_tilde where `initial` has it and a turbulence model
-    /// runs) and restarts the history: time 0, step 0, first step BDF1,
-    /// face fluxes interpolated from the new velocity.
+    /// Replaces u, v, p (cell values; and the model's variables that `initial` holds) and
+    /// restarts the history: time 0, step 0, first step BDF1, face fluxes interpolated from the
+    /// new velocity.
     void initialize(const FlowFields& initial);
 
     /// One time-accurate step of size dt (time_accurate mode). `nominal_dt` is the step the run
@@ -73,12 +75,14 @@ public:
     long step_count() const;
     /// Circulation of the far-field point vortex (clockwise positive, = Cl / 2 for U = c = 1).
     double far_field_circulation() const;
+    /// The turbulence model's transported variables (empty when laminar).
+    const std::vector<ModelVariable>& model_variables() const;
 
     /// Everything a restart needs to continue bit for bit: fields at two time levels, face
     /// fluxes at two levels, pressure, local time steps, counters, time-step history, vortex.
     std::vector<NamedArray> state() const;
-    /// Restores a state() of a solver built on the same grid and settings; throws InputError
-    /// naming a missing or mis-sized array.
+    /// Restores a state() of a solver built on the same grid and settings (the model's
+    /// variables under their names); throws InputError naming a missing or mis-sized array.
     void restore(const std::vector<NamedArray>& state);
 
 private:

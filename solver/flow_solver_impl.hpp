@@ -9,11 +9,11 @@
 #include "solver/cell_field.hpp"
 #include "solver/connectivity.hpp"
 #include "solver/face_geometry.hpp"
+#include "solver/flow_model.hpp"
 #include "solver/flow_solver.hpp"
 #include "solver/line_relaxation.hpp"
 #include "solver/momentum_system.hpp"
 #include "solver/pressure_solver.hpp"
-#include "solver/turbulence_model.hpp"
 
 namespace veer {
 
@@ -43,7 +43,7 @@ struct FlowSolverCore {
     MomentumSystem system;
     LineWork line_work;
     std::unique_ptr<PressureSolver> pressure_solver;
-    TurbulenceModel turbulence;          ///< Laminar, or a model holding nu_tilde
+    std::unique_ptr<FlowModel> model;    ///< the turbulence model (laminar: no variables)
     std::vector<double> eddy_i, eddy_j;  ///< face eddy viscosity of the current step
 
     double time = 0.0;
@@ -60,7 +60,7 @@ struct FlowSolverCore {
     void setup_uniform_pressure();
     StepReport step(double dt, bool steady, double nominal_dt = 0.0);
     void update_vortex();
-    void advance_turbulence(double dt, bool steady, StepReport& r);
+    void advance_model(double dt, bool steady, StepReport& r);
 };
 
 }  // namespace veer

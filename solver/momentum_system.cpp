@@ -3,6 +3,7 @@
 #include <algorithm>
 
 #include "solver/loops.hpp"
+#include "solver/van_leer.hpp"
 
 namespace veer {
 
@@ -22,17 +23,6 @@ namespace {
 /// Laminar plus eddy viscosity on one face.
 inline double face_nu(double nu, const std::vector<double>* eddy, std::size_t k) {
     return eddy ? nu + (*eddy)[k] : nu;
-}
-
-/// F * (limited upwind-biased value - upwind value): the deferred convective correction.
-inline double convective_correction(double flux, double q_far_l, double q_l, double q_r,
-                                    double q_far_r) {
-    const double up = flux >= 0.0 ? q_l : q_r;
-    const double far = flux >= 0.0 ? q_far_l : q_far_r;
-    const double down = flux >= 0.0 ? q_r : q_l;
-    const double a = up - far, b = down - up;
-    const double slope = a * b > 0.0 ? 2.0 * a * b / (a + b) : 0.0;  // van Leer
-    return flux * 0.5 * slope;
 }
 
 /// Explicit face fluxes of both families (towards +i / +j).
@@ -56,9 +46,9 @@ void face_pass(const FaceGeometry& g, const MomentumInputs& in, MomentumSystem& 
         const CellView& u = in.u_lag;
         const CellView& v = in.v_lag;
         s.explicit_i_u[k] =
-            du - convective_correction(flux, u(f - 2, j), u(f - 1, j), u(f, j), u(f + 1, j));
+            du - van_leer_correction(flux, u(f - 2, j), u(f - 1, j), u(f, j), u(f + 1, j));
         s.explicit_i_v[k] =
-            dv - convective_correction(flux, v(f - 2, j), v(f - 1, j), v(f, j), v(f + 1, j));
+            dv - van_leer_correction(flux, v(f - 2, j), v(f - 1, j), v(f, j), v(f + 1, j));
     });
     const FaceFamily& fj = g.j_faces;
     for_each_cell({0, g.ni, 0, g.nj + 1}, [&](int i, int f) {
@@ -79,9 +69,9 @@ void face_pass(const FaceGeometry& g, const MomentumInputs& in, MomentumSystem& 
         const CellView& u = in.u_lag;
         const CellView& v = in.v_lag;
         s.explicit_j_u[k] =
-            du - convective_correction(flux, u(i, f - 2), u(i, f - 1), u(i, f), u(i, f + 1));
+            du - van_leer_correction(flux, u(i, f - 2), u(i, f - 1), u(i, f), u(i, f + 1));
         s.explicit_j_v[k] =
-            dv - convective_correction(flux, v(i, f - 2), v(i, f - 1), v(i, f), v(i, f + 1));
+            dv - van_leer_correction(flux, v(i, f - 2), v(i, f - 1), v(i, f), v(i, f + 1));
     });
 }
 

@@ -110,10 +110,11 @@ void coarsen_j_faces(const FineFaces& f, PoissonStencil& c) {
 
 }  // namespace
 
-bool can_coarsen(const PoissonStencil& s) {
-    if (s.ni % 2 != 0 || s.nj % 2 != 0 || s.ni < 4 || s.nj < 4) return false;
-    if (!s.wake_cut) return true;
-    return s.wake_cut->wake % 2 == 0 && s.wake_cut->around % 2 == 0 && s.wake_cut->around >= 4;
+bool can_coarsen(const PoissonStencil& fine) {
+    if (fine.ni % 2 != 0 || fine.nj % 2 != 0 || fine.ni < 4 || fine.nj < 4) return false;
+    if (!fine.wake_cut) return true;
+    return fine.wake_cut->wake % 2 == 0 && fine.wake_cut->around % 2 == 0 &&
+           fine.wake_cut->around >= 4;
 }
 
 int multigrid_level_count(const PoissonStencil& fine, int max_levels, int coarsest_cells) {

@@ -4,12 +4,12 @@
 ///
 ///   L(p)_P = sum over faces f of P:  coef_f * (p_nb(f) - p_P)
 ///
-/// where p_nb is the neighbour across the face: the next cell in the block, the mirrored cell across
-/// the C-grid wake cut (j = 0, i < wake or i >= wake + around: neighbour (ni-1-i, 0)), the cell on the
-/// opposite side of a periodic block, or, on a boundary face flagged Dirichlet, the value 0 (the
-/// boundary value of a pressure increment). Boundary faces not flagged Dirichlet are Neumann (no
-/// flux). Where nothing is Dirichlet, L is singular: solvers return the zero-mean solution and
-/// project the right-hand side onto the range first.
+/// where p_nb is the neighbour across the face: the next cell in the block, the mirrored cell
+/// across the C-grid wake cut (j = 0, i < wake or i >= wake + around: neighbour (ni-1-i, 0)), the
+/// cell on the opposite side of a periodic block, or, on a boundary face flagged Dirichlet, the
+/// value 0 (the boundary value of a pressure increment). Boundary faces not flagged Dirichlet are
+/// Neumann (no flux). Where nothing is Dirichlet, L is singular: solvers return the zero-mean
+/// solution and project the right-hand side onto the range first.
 #include <cstdint>
 #include <optional>
 #include <vector>

@@ -1,7 +1,5 @@
 #include "solver/pressure_solver.hpp"
 
-#include <string>
-
 #include "mesh/errors.hpp"
 #include "solver/multigrid_solver.hpp"
 #include "solver/pressure_solver_eigen.hpp"
@@ -25,19 +23,11 @@ std::string_view pressure_solver_kind_name(PressureSolverKind kind) {
         case PressureSolverKind::multigrid:
             return "multigrid";
         case PressureSolverKind::eigen_cg:
-            return "eigen_cg";
+            return "eigen-cg";
         case PressureSolverKind::eigen_bicgstab:
-            return "eigen_bicgstab";
+            return "eigen-bicgstab";
     }
     return "unknown";
-}
-
-PressureSolverKind parse_pressure_solver_kind(std::string_view text, std::string_view where) {
-    for (auto kind : {PressureSolverKind::multigrid, PressureSolverKind::eigen_cg,
-                      PressureSolverKind::eigen_bicgstab})
-        if (text == pressure_solver_kind_name(kind)) return kind;
-    throw InputError(std::string(where) + ": pressure solver '" + std::string(text) +
-                     "' is not known; allowed: multigrid, eigen_cg, eigen_bicgstab");
 }
 
 }  // namespace veer

@@ -48,11 +48,13 @@ enum class PressureSolverKind {
 /// A fresh solver of the given kind (setup still to be called).
 std::unique_ptr<PressureSolver> make_pressure_solver(PressureSolverKind kind);
 
-/// The kind named by `text` ("multigrid", "eigen_cg", "eigen_bicgstab"). Throws InputError naming
-/// `where` (e.g. "case.toml:12 key pressure.solver"), the value found and the values allowed.
-PressureSolverKind parse_pressure_solver_kind(std::string_view text, std::string_view where);
+/// Every kind, in the order the README lists them.
+inline constexpr PressureSolverKind pressure_solver_kinds[] = {PressureSolverKind::multigrid,
+                                                               PressureSolverKind::eigen_cg,
+                                                               PressureSolverKind::eigen_bicgstab};
 
-/// The case-file word for a kind (inverse of parse_pressure_solver_kind).
+/// The case-file word for a kind: "multigrid", "eigen-cg", "eigen-bicgstab" (the case file
+/// reader, io/case_choices.hpp, accepts these and no other spelling).
 std::string_view pressure_solver_kind_name(PressureSolverKind kind);
 
 }  // namespace veer

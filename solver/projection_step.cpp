@@ -171,8 +171,8 @@ StepReport FlowSolverCore::step(double dt, bool steady, double nominal_dt) {
     in.time_diag = &time_diag;
     in.time_rhs_u = &time_rhs_u;
     in.time_rhs_v = &time_rhs_v;
-    if (has_eddy_viscosity(turbulence)) {
-        face_eddy_viscosity(turbulence, eddy_i, eddy_j);
+    if (model->has_eddy_viscosity()) {
+        model->face_eddy_viscosity(eddy_i, eddy_j);
         in.eddy_i = &eddy_i;
         in.eddy_j = &eddy_j;
     }
@@ -216,7 +216,7 @@ StepReport FlowSolverCore::step(double dt, bool steady, double nominal_dt) {
     time = t_new;
     ++steps;
     if (vortex_active) update_vortex();
-    advance_turbulence(dt, steady, r);
+    advance_model(dt, steady, r);
     r.step = steps;
     r.time = time;
     r.time_step = dt;
@@ -233,10 +233,10 @@ StepReport FlowSolverCore::step(double dt, bool steady, double nominal_dt) {
     return r;
 }
 
-void FlowSolverCore::advance_turbulence(double dt, bool steady, StepReport& r) {
-    if (!has_eddy_viscosity(turbulence)) return;
+void FlowSolverCore::advance_model(double dt, bool steady, StepReport& r) {
+    if (model->variables().empty()) return;
     fill_velocity_ghosts(faces, connectivity, vel.u.view(), vel.v.view());
-    TurbulenceInputs in;
+    ModelStepInputs in;
     in.u = vel.u.view();
     in.v = vel.v.view();
     in.flux_i = &flux_i;
@@ -244,13 +244,15 @@ void FlowSolverCore::advance_turbulence(double dt, bool steady, StepReport& r) {
     if (steady) in.local_dt = local_dt.view();
     in.dt = dt;
     in.steady = steady;
-    const TurbulenceReport t = advance(turbulence, in);
-    r.residual_nu_tilde = t.residual;
-    if (!t.finite && r.finite) {
+    ModelStepReport m = model->advance(in);
+    VEER_VERIFY(m.residuals.size() == model->variables().size(),
+                "a model reports one residual per variable");
+    r.model_residuals = std::move(m.residuals);
+    if (!m.finite && r.finite) {
         r.finite = false;
-        r.worst_i = t.worst_i;
-        r.worst_j = t.worst_j;
-        r.worst_variable = "nu_tilde";
+        r.worst_i = m.worst_i;
+        r.worst_j = m.worst_j;
+        r.worst_variable = m.worst_variable;
     }
 }
 

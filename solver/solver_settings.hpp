@@ -5,8 +5,9 @@
 
 #include "mesh/vec2.hpp"
 #include "solver/boundary_faces.hpp"
+#include "solver/flow_model.hpp"
+#include "solver/laminar_model.hpp"
 #include "solver/pressure_solver.hpp"
-#include "solver/turbulence_model.hpp"
 
 namespace veer {
 
@@ -19,7 +20,7 @@ struct SolverSettings {
 
     // Steady pseudo-time marching.
     /// Local time step = pseudo_cfl / spectral radius; 0: the default of the model
-    /// (effective_pseudo_cfl()).
+    /// (ModelDescriptor::steady_pseudo_cfl, effective_pseudo_cfl()).
     double pseudo_cfl = 0.0;
     double viscous_weight = 0.25;  ///< weight of the viscous radius in the local step
     int local_step_interval = 20;  ///< local steps (and the Poisson set-up) renewed every N
@@ -49,9 +50,9 @@ struct SolverSettings {
     Vec2 vortex_center{0.25, 0.0};    ///< quarter chord (chords)
     double vortex_relaxation = 0.05;  ///< fraction of the lift-based update taken each step
 
-    // Turbulence model (turbulence_model.hpp): its eddy viscosity enters the momentum diffusion.
-    TurbulenceModelKind turbulence = TurbulenceModelKind::laminar;
-    SpalartAllmarasSettings spalart_allmaras;
+    /// The turbulence model (flow_model.hpp, model_registry.hpp): its eddy viscosity enters
+    /// the momentum diffusion; its variables are advanced after each projection step.
+    ModelDescriptor model = laminar_descriptor();
 
     /// Per-segment velocity prescriptions (manufactured solutions, moving lids).
     std::vector<VelocityOverride> velocity_overrides;
@@ -59,22 +60,9 @@ struct SolverSettings {
     std::function<Vec2(Vec2 x, double t)> body_force;
 };
 
-/// Default pseudo CFL numbers. Laminar: 5. Spalart-Allmaras: 2. On y+ ~ 1 grids at Re 6e6
-/// (NACA 0012, 384 x 128 cells) a pseudo-time step beyond the stability limit of the partly
-/// implicit step in the thin wall cells under the suction peak leaves the steady iteration in a
-/// two-step cycle (u changing by 0.04 every step, Cl by 2e-5, residuals flat; also with
-/// first-order convection and with nu_tilde's step scale 1), not at a steady solution: at
-/// alpha 10 with 5 and 4; at alpha 12 with 3, from the free stream and from the 10-degree
-/// solution alike (residuals flat from step 1000, Cl alternating 1.26460 / 1.26461). 2.5 and 2
-/// converge at 12 (1205 and 1434 steps) and 2 also where 3 cycled before (alpha 15 on 384 x 128,
-/// alpha 0 on 256 x 96); 2 costs about a third more steps than 3 where both converge.
-constexpr double laminar_pseudo_cfl = 5.0;
-constexpr double turbulent_pseudo_cfl = 2.0;
-
 /// The pseudo CFL number a solver with these settings uses.
 inline double effective_pseudo_cfl(const SolverSettings& s) {
-    if (s.pseudo_cfl > 0.0) return s.pseudo_cfl;
-    return s.turbulence == TurbulenceModelKind::laminar ? laminar_pseudo_cfl : turbulent_pseudo_cfl;
+    return s.pseudo_cfl > 0.0 ? s.pseudo_cfl : s.model.steady_pseudo_cfl;
 }
 
 }  // namespace veer

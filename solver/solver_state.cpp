@@ -42,7 +42,7 @@ std::vector<NamedArray> FlowSolver::state() const {
         {"local_time_step", s.local_dt.interior()},
         {"clock", {s.time, static_cast<double>(s.steps), s.dt_previous, s.circulation}},
     };
-    if (has_eddy_viscosity(s.turbulence)) out.push_back({"nu_tilde", nu_tilde(s.turbulence)});
+    for (NamedArray& a : s.model->values()) out.push_back(std::move(a));
     return out;
 }
 
@@ -64,8 +64,10 @@ void FlowSolver::restore(const std::vector<NamedArray>& state) {
     s.steps = static_cast<long>(clock[1]);
     s.dt_previous = clock[2];
     s.circulation = clock[3];
-    if (auto* sa = std::get_if<SpalartAllmaras>(&s.turbulence))
-        sa->set_nu_tilde(find_array(state, "nu_tilde", n).values);
+    std::vector<NamedArray> model_state;
+    for (const ModelVariable& v : s.model->variables())
+        model_state.push_back(find_array(state, v.name, n));
+    s.model->set_values(model_state);
     if (s.settings.mode == TimeMode::steady) {
         // Rebuild the face steps and Poisson set-up from the stored local steps, as the
         // uninterrupted run built them at its last renewal.

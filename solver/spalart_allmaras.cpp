@@ -39,7 +39,7 @@ SpalartAllmaras::SpalartAllmaras(const FaceGeometry& geom, const std::vector<Bou
       m_nu(nu),
       m_settings(std::move(settings)) {
     check_settings(m_settings, nu, geom.volume.size(), m_wall_distance.size());
-    m_conditions = nu_tilde_conditions(faces, free_stream_nu_tilde(), m_settings.prescribed_value);
+    m_conditions = scalar_face_conditions(faces, boundary_column());
     const int ni = geom.ni, nj = geom.nj;
     for (CellField* f : {&m_nu_tilde, &m_nu_tilde_new, &m_unused, &m_grad_x, &m_grad_y, &m_ux,
                          &m_uy, &m_vx, &m_vy})
@@ -56,9 +56,20 @@ SpalartAllmaras::SpalartAllmaras(const FaceGeometry& geom, const std::vector<Bou
     set_nu_tilde(std::vector<double>(n, free_stream_nu_tilde()));
 }
 
+ScalarColumn SpalartAllmaras::boundary_column() const {
+    return nu_tilde_column(free_stream_nu_tilde(), m_settings.prescribed_value);
+}
+
+void SpalartAllmaras::set_source_modifiers(const std::vector<double>* production_factor,
+                                           const std::vector<double>* trip_ft2) {
+    for (const std::vector<double>* v : {production_factor, trip_ft2})
+        VEER_VERIFY(!v || v->size() == m_geom->volume.size(), "one source modifier per cell");
+    m_production_factor = production_factor;
+    m_trip_ft2 = trip_ft2;
+}
+
 void SpalartAllmaras::fill_ghosts(CellView q) {
-    fill_nu_tilde_boundary_ghosts(*m_faces, m_conditions, q);
-    fill_connected_ghosts(*m_connectivity, q);
+    fill_scalar_ghosts(*m_faces, m_conditions, *m_connectivity, q);
 }
 
 void SpalartAllmaras::set_nu_tilde(const std::vector<double>& values) {
@@ -70,7 +81,7 @@ void SpalartAllmaras::set_nu_tilde(const std::vector<double>& values) {
 std::vector<double> SpalartAllmaras::nu_tilde() const { return m_nu_tilde.interior(); }
 
 /// Vorticity magnitude from Green-Gauss velocity gradients, then the split source per cell.
-void SpalartAllmaras::compute_sources(const TurbulenceInputs& in) {
+void SpalartAllmaras::compute_sources(const ModelStepInputs& in) {
     const FaceGeometry& g = *m_geom;
     const std::size_t n = g.volume.size();
     if (!m_settings.model_sources) {
@@ -86,13 +97,17 @@ void SpalartAllmaras::compute_sources(const TurbulenceInputs& in) {
     for_each_cell({0, g.ni, 0, g.nj}, [&](int i, int j) {
         const std::size_t k = g.cell(i, j);
         const double omega = std::abs(vx(i, j) - uy(i, j));
-        const SaSourceSplit s = sa_source_linearised(q(i, j), omega, m_wall_distance[k], m_nu);
+        SaSourceModifiers modifiers;
+        if (m_production_factor) modifiers.production_factor = (*m_production_factor)[k];
+        if (m_trip_ft2) modifiers.ft2 = (*m_trip_ft2)[k];
+        const SaSourceSplit s =
+            sa_source_linearised(q(i, j), omega, m_wall_distance[k], m_nu, modifiers);
         m_source_explicit[k] = s.explicit_part + m_manufactured[k];
         m_source_implicit[k] = s.implicit_coefficient;
     });
 }
 
-TurbulenceReport SpalartAllmaras::advance(const TurbulenceInputs& in) {
+TurbulenceReport SpalartAllmaras::advance(const ModelStepInputs& in) {
     const FaceGeometry& g = *m_geom;
     CellView q = m_nu_tilde.view();
     fill_ghosts(q);
@@ -125,7 +140,7 @@ TurbulenceReport SpalartAllmaras::advance(const TurbulenceInputs& in) {
 }
 
 /// Residual, finiteness, the worst cell; then the new level becomes current.
-TurbulenceReport SpalartAllmaras::finish(const TurbulenceInputs& in) {
+TurbulenceReport SpalartAllmaras::finish(const ModelStepInputs& in) {
     const FaceGeometry& g = *m_geom;
     TurbulenceReport r;
     CellView q = m_nu_tilde.view(), qn = m_nu_tilde_new.view();

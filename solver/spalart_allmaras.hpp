@@ -18,23 +18,13 @@
 #include "solver/cell_field.hpp"
 #include "solver/connectivity.hpp"
 #include "solver/face_geometry.hpp"
+#include "solver/flow_model.hpp"
 #include "solver/line_relaxation.hpp"
 #include "solver/momentum_system.hpp"
 #include "solver/spalart_allmaras_settings.hpp"
 #include "solver/spalart_allmaras_transport.hpp"
 
 namespace veer {
-
-/// What one step reads: the flow after its update (ghosts filled).
-struct TurbulenceInputs {
-    CellView u, v;                      ///< velocity with ghosts filled (free-stream units)
-    const std::vector<double>* flux_i;  ///< face fluxes towards +i (chords^2 per time unit)
-    const std::vector<double>* flux_j;
-    /// Steady: per-cell pseudo-time steps (time units); time-accurate: leave empty, set dt.
-    CellView local_dt;
-    double dt = 0.0;  ///< uniform step (time-accurate: BDF1 for nu_tilde)
-    bool steady = true;
-};
 
 /// What one step did.
 struct TurbulenceReport {
@@ -54,7 +44,7 @@ public:
                     SpalartAllmarasSettings settings = {});
 
     /// One implicit step of the nu_tilde equation.
-    TurbulenceReport advance(const TurbulenceInputs& in);
+    TurbulenceReport advance(const ModelStepInputs& in);
 
     /// Cell eddy viscosity nu~ f_v1 (0 where nu~ < 0), ni * nj (chords x free-stream speed).
     std::vector<double> eddy_viscosity() const;
@@ -66,12 +56,20 @@ public:
     std::vector<double> nu_tilde() const;
     void set_nu_tilde(const std::vector<double>& values);
     double free_stream_nu_tilde() const { return m_settings.free_stream_ratio * m_nu; }
+    /// The nu_tilde column of the boundary table this model applies.
+    ScalarColumn boundary_column() const;
+
+    /// Per-cell changes of the source by a transition model built on this one
+    /// (SaSourceModifiers, spalart_allmaras_terms.hpp): a production factor and f_t2, ni * nj
+    /// each, owned by the caller and read at every step; null: the standard model.
+    void set_source_modifiers(const std::vector<double>* production_factor,
+                              const std::vector<double>* trip_ft2);
     const std::vector<double>& wall_distance() const { return m_wall_distance; }
 
 private:
     void fill_ghosts(CellView q);
-    void compute_sources(const TurbulenceInputs& in);
-    TurbulenceReport finish(const TurbulenceInputs& in);
+    void compute_sources(const ModelStepInputs& in);
+    TurbulenceReport finish(const ModelStepInputs& in);
 
     const FaceGeometry* m_geom;
     const std::vector<BoundaryFace>* m_faces;
@@ -79,7 +77,9 @@ private:
     std::vector<double> m_wall_distance;
     double m_nu;
     SpalartAllmarasSettings m_settings;
-    std::vector<NuTildeCondition> m_conditions;
+    std::vector<ScalarFaceCondition> m_conditions;
+    const std::vector<double>* m_production_factor = nullptr;
+    const std::vector<double>* m_trip_ft2 = nullptr;
 
     CellField m_nu_tilde, m_nu_tilde_new, m_unused, m_grad_x, m_grad_y;
     CellField m_ux, m_uy, m_vx, m_vy;

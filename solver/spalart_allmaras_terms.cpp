@@ -46,7 +46,8 @@ double sa_diffusivity(double nu_tilde, double nu) {
     return (nu + nu_tilde * sa_fn(nu_tilde / nu)) / C::sigma;
 }
 
-SaSourceSplit sa_source(double nu_tilde, double omega, double wall_distance, double nu) {
+SaSourceSplit sa_source(double nu_tilde, double omega, double wall_distance, double nu,
+                        const SaSourceModifiers& modifiers) {
     SaSourceSplit s;
     const double chi = nu_tilde / nu;
     const double inv_d2 = 1.0 / (wall_distance * wall_distance);
@@ -58,13 +59,13 @@ SaSourceSplit sa_source(double nu_tilde, double omega, double wall_distance, dou
         s.implicit_coefficient = -C::cb1 * (1.0 - C::ct3) * omega - C::cw1 * nu_tilde * inv_d2;
         return s;
     }
-    const double ft2 = sa_ft2(chi);
+    const double ft2 = modifiers.ft2 ? *modifiers.ft2 : sa_ft2(chi);
     const double s_bar = nu_tilde * sa_fv2(chi) * inv_d2 / kappa2;
     const double s_tilde = sa_s_tilde(omega, s_bar);
     double r = C::r_max;
     if (s_tilde > 0.0) r = std::min(nu_tilde * inv_d2 / (s_tilde * kappa2), C::r_max);
     const double fw = sa_fw(r);
-    s.production = C::cb1 * (1.0 - ft2) * s_tilde * nu_tilde;
+    s.production = modifiers.production_factor * C::cb1 * (1.0 - ft2) * s_tilde * nu_tilde;
     s.destruction = (C::cw1 * fw - C::cb1 * ft2 / kappa2) * nu_tilde * nu_tilde * inv_d2;
     s.explicit_part = std::max(s.production, 0.0) + std::max(-s.destruction, 0.0);
     if (nu_tilde > 0.0)
@@ -73,14 +74,15 @@ SaSourceSplit sa_source(double nu_tilde, double omega, double wall_distance, dou
     return s;
 }
 
-SaSourceSplit sa_source_linearised(double nu_tilde, double omega, double wall_distance, double nu) {
-    SaSourceSplit s = sa_source(nu_tilde, omega, wall_distance, nu);
+SaSourceSplit sa_source_linearised(double nu_tilde, double omega, double wall_distance, double nu,
+                                   const SaSourceModifiers& modifiers) {
+    SaSourceSplit s = sa_source(nu_tilde, omega, wall_distance, nu, modifiers);
     const double net = s.production - s.destruction;
     // Step towards zero so that the difference stays on the branch of nu_tilde.
     const double h = (nu_tilde >= 0.0 ? -1.0 : 1.0) * 1e-6 * std::max(std::abs(nu_tilde), nu);
     const double probe = nu_tilde + h;
     if ((probe >= 0.0) != (nu_tilde >= 0.0)) return s;  // too close to zero to difference
-    const SaSourceSplit p = sa_source(probe, omega, wall_distance, nu);
+    const SaSourceSplit p = sa_source(probe, omega, wall_distance, nu, modifiers);
     const double loss_rate = -((p.production - p.destruction) - net) / h;
     if (loss_rate > s.implicit_coefficient) {
         s.implicit_coefficient = loss_rate;

@@ -26,6 +26,8 @@
 ///
 /// Omega is the magnitude of the vorticity, d the distance to the wall.
 
+#include <optional>
+
 namespace veer {
 
 /// Published model constants (sources beside each).
@@ -82,9 +84,21 @@ struct SaSourceSplit {
     double destruction = 0.0;           ///< the destruction term itself (signed; loss > 0)
 };
 
+/// What a transition model built on this one changes in the source of a cell: a factor on the
+/// production c_b1 (1 - f_t2) S~ nu~ (the algebraic intermittency of SA-BCM, Cakmakcioglu, Bas,
+/// Mura & Kaynak, AIAA 2020-2706), and f_t2 given instead of c_t3 exp(-c_t4 chi^2) (SA-AFT2017b,
+/// Coder, Pulliam & Jensen, AIAA 2018-1039: c_t3 (1 - exp(log-intermittency)); 0 for SA-BCM's
+/// SA-noft2 base). The defaults are the standard model, to the bit. The SA-neg branch is
+/// unchanged.
+struct SaSourceModifiers {
+    double production_factor = 1.0;
+    std::optional<double> ft2;
+};
+
 /// Source terms at a cell with vorticity magnitude omega (1/time), wall distance d (chords),
 /// molecular viscosity nu and the current nu_tilde.
-SaSourceSplit sa_source(double nu_tilde, double omega, double wall_distance, double nu);
+SaSourceSplit sa_source(double nu_tilde, double omega, double wall_distance, double nu,
+                        const SaSourceModifiers& modifiers = {});
 
 /// The same source with the implicit coefficient raised, where needed, to the loss rate
 /// -dS/dnu~ of the net source S = P - D (by a one-sided difference), and the explicit part
@@ -92,6 +106,7 @@ SaSourceSplit sa_source(double nu_tilde, double omega, double wall_distance, dou
 /// alone lets large pseudo-time steps settle into a two-cycle where f_t2 and f_w vary fast;
 /// with the loss rate on the diagonal the point update is a damped Newton step. Positivity
 /// holds as for sa_source (the coefficient only grows).
-SaSourceSplit sa_source_linearised(double nu_tilde, double omega, double wall_distance, double nu);
+SaSourceSplit sa_source_linearised(double nu_tilde, double omega, double wall_distance, double nu,
+                                   const SaSourceModifiers& modifiers = {});
 
 }  // namespace veer

@@ -4,57 +4,21 @@
 
 #include "solver/loops.hpp"
 #include "solver/spalart_allmaras_terms.hpp"
+#include "solver/van_leer.hpp"
 
 namespace veer {
 
-std::vector<NuTildeCondition> nu_tilde_conditions(const std::vector<BoundaryFace>& faces,
-                                                  double free_stream_nu_tilde,
-                                                  const std::function<double(Vec2)>& prescribed) {
-    std::vector<NuTildeCondition> out(faces.size());
-    for (std::size_t k = 0; k < faces.size(); ++k) {
-        const BoundaryFace& f = faces[k];
-        switch (f.role) {
-            case FaceRole::wall:
-                out[k] = {true, 0.0};
-                break;
-            case FaceRole::inflow:
-                out[k] = {true, free_stream_nu_tilde};
-                break;
-            case FaceRole::outflow:
-                out[k] = {false, 0.0};
-                break;
-            case FaceRole::prescribed_velocity:
-                out[k] = {true, prescribed ? prescribed(f.center) : 0.0};
-                break;
-        }
-    }
-    return out;
-}
-
-void fill_nu_tilde_boundary_ghosts(const std::vector<BoundaryFace>& faces,
-                                   const std::vector<NuTildeCondition>& conditions, CellView q) {
-    for (std::size_t k = 0; k < faces.size(); ++k) {
-        const BoundaryFace& f = faces[k];
-        const double qp = q(f.i, f.j);
-        const double ghost = conditions[k].dirichlet ? 2.0 * conditions[k].value - qp : qp;
-        q(f.gi, f.gj) = ghost;
-        q(f.gi + (f.gi - f.i), f.gj + (f.gj - f.j)) = ghost;
-    }
+ScalarColumn nu_tilde_column(double free_stream_nu_tilde,
+                             const std::function<double(Vec2)>& prescribed) {
+    ScalarColumn c;
+    c.wall = {Condition::dirichlet, 0.0, {}};
+    c.inflow = {Condition::dirichlet, free_stream_nu_tilde, {}};
+    c.outflow = {Condition::neumann, 0.0, {}};
+    c.prescribed_velocity = {Condition::dirichlet, 0.0, prescribed};
+    return c;
 }
 
 namespace {
-
-/// F * (limited upwind-biased value - upwind value), van Leer's limiter: the same deferred
-/// correction as the momentum equations' (momentum_system.cpp).
-inline double limited_correction(double flux, double q_far_l, double q_l, double q_r,
-                                 double q_far_r) {
-    const double up = flux >= 0.0 ? q_l : q_r;
-    const double far = flux >= 0.0 ? q_far_l : q_far_r;
-    const double down = flux >= 0.0 ? q_r : q_l;
-    const double a = up - far, b = down - up;
-    const double slope = a * b > 0.0 ? 2.0 * a * b / (a + b) : 0.0;
-    return flux * 0.5 * slope;
-}
 
 void face_pass(const FaceGeometry& g, const NuTildeInputs& in, NuTildeFaceWork& w) {
     const CellView q = in.nu_tilde, gx = in.grad_x, gy = in.grad_y;
@@ -66,7 +30,7 @@ void face_pass(const FaceGeometry& g, const NuTildeInputs& in, NuTildeFaceWork& 
         mu[k] = sa_diffusivity(0.5 * (q_l + q_r), in.nu);
         skew[k] = mu[k] * (fam.skew[k].x * gfx + fam.skew[k].y * gfy);
         const bool corrected = in.second_order && !fam.physical[k];
-        conv[k] = corrected ? limited_correction(flux, q_ll, q_l, q_r, q_rr) : 0.0;
+        conv[k] = corrected ? van_leer_correction(flux, q_ll, q_l, q_r, q_rr) : 0.0;
     };
     for_each_cell({0, g.ni + 1, 0, g.nj}, [&](int f, int j) {
         face(g.i_faces, g.face_i(f, j), (*in.flux_i)[g.face_i(f, j)], q(f - 2, j), q(f - 1, j),
@@ -136,14 +100,14 @@ void cell_pass(const FaceGeometry& g, const NuTildeInputs& in, const NuTildeFace
 
 /// Neumann faces carry no non-orthogonal diffusion (zero normal gradient).
 void clear_neumann_skew(const std::vector<BoundaryFace>& faces,
-                        const std::vector<NuTildeCondition>& conditions, NuTildeFaceWork& w) {
+                        const std::vector<ScalarFaceCondition>& conditions, NuTildeFaceWork& w) {
     for (std::size_t k = 0; k < faces.size(); ++k)
         if (!conditions[k].dirichlet) (faces[k].i_face ? w.skew_i : w.skew_j)[faces[k].face] = 0.0;
 }
 
 /// Replaces the ghost neighbour of each physical face by its condition.
 void fold_boundaries(const FaceGeometry& g, const std::vector<BoundaryFace>& faces,
-                     const std::vector<NuTildeCondition>& conditions, const NuTildeInputs& in,
+                     const std::vector<ScalarFaceCondition>& conditions, const NuTildeInputs& in,
                      MomentumSystem& s) {
     for (std::size_t k = 0; k < faces.size(); ++k) {
         const BoundaryFace& b = faces[k];
@@ -172,7 +136,7 @@ void NuTildeFaceWork::resize(const FaceGeometry& g) {
 }
 
 void assemble_nu_tilde(const FaceGeometry& g, const std::vector<BoundaryFace>& faces,
-                       const std::vector<NuTildeCondition>& conditions, const NuTildeInputs& in,
+                       const std::vector<ScalarFaceCondition>& conditions, const NuTildeInputs& in,
                        NuTildeFaceWork& work, MomentumSystem& sys) {
     face_pass(g, in, work);
     clear_neumann_skew(faces, conditions, work);

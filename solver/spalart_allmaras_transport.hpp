@@ -22,11 +22,13 @@
 ///   |grad q|^2 with the large local steps of a steady run overshoots near steep gradients.
 ///   Elsewhere (SA-neg cells) c_b2 / sigma |grad q|^2 from Green-Gauss gradients, explicit;
 /// - the model source split as sa_source() does: gains explicit, losses on the diagonal.
-/// Physical faces are folded into the diagonal and right-hand side (nu_tilde_condition()).
+/// Physical faces are folded into the diagonal and right-hand side (nu_tilde_column()).
 #include <functional>
 #include <vector>
 
 #include "solver/boundary_faces.hpp"
+#include "solver/boundary_ghosts.hpp"
+#include "solver/boundary_table.hpp"
 #include "solver/cell_field.hpp"
 #include "solver/face_geometry.hpp"
 #include "solver/momentum_system.hpp"
@@ -34,28 +36,16 @@
 namespace veer {
 
 /// The nu_tilde column of the boundary table (boundary_table.hpp):
-/// | role                | nu_tilde                                             |
-/// |---------------------|------------------------------------------------------|
-/// | wall                | Dirichlet 0                                          |
+/// | role                | nu_tilde                                                 |
+/// |---------------------|----------------------------------------------------------|
+/// | wall                | Dirichlet 0                                              |
 /// | inflow (far field)  | Dirichlet nu_tilde_inf (3 nu: common practice, NASA TMR) |
-/// | outflow             | Neumann, zero normal gradient                        |
-/// | prescribed velocity | Dirichlet: the prescribed value (0 on moving walls)  |
-/// | wake cut, periodic  | connectivity                                         |
-struct NuTildeCondition {
-    bool dirichlet = true;
-    double value = 0.0;  ///< boundary value where Dirichlet
-};
-
-/// Conditions of every physical face (same order as `faces`); `prescribed(x)` gives the value on
-/// prescribed-velocity faces (empty: 0, a moving wall).
-std::vector<NuTildeCondition> nu_tilde_conditions(const std::vector<BoundaryFace>& faces,
-                                                  double free_stream_nu_tilde,
-                                                  const std::function<double(Vec2)>& prescribed);
-
-/// Ghosts of nu_tilde from the conditions (Dirichlet: 2 q_b - q_P; Neumann: q_P, both layers);
-/// the connected ghosts are left to the caller (fill_connected_ghosts).
-void fill_nu_tilde_boundary_ghosts(const std::vector<BoundaryFace>& faces,
-                                   const std::vector<NuTildeCondition>& conditions, CellView q);
+/// | outflow             | Neumann, zero normal gradient                            |
+/// | prescribed velocity | Dirichlet: the prescribed value (0 on moving walls)      |
+/// | wake cut, periodic  | connectivity                                             |
+/// `prescribed(x)` gives the value on prescribed-velocity faces (empty: 0, a moving wall).
+ScalarColumn nu_tilde_column(double free_stream_nu_tilde,
+                             const std::function<double(Vec2)>& prescribed);
 
 /// What the assembly reads. Views must have their ghosts filled.
 struct NuTildeInputs {
@@ -82,7 +72,7 @@ struct NuTildeFaceWork {
 
 /// Assembles the nu_tilde system into `sys` (rhs_u; rhs_v is zeroed).
 void assemble_nu_tilde(const FaceGeometry& g, const std::vector<BoundaryFace>& faces,
-                       const std::vector<NuTildeCondition>& conditions, const NuTildeInputs& in,
+                       const std::vector<ScalarFaceCondition>& conditions, const NuTildeInputs& in,
                        NuTildeFaceWork& work, MomentumSystem& sys);
 
 }  // namespace veer

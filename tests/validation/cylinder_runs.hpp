@@ -79,7 +79,7 @@ inline CylinderRun run_cylinder(const std::vector<std::string>& overrides,
     const CaseSpec spec =
         read_case_file(repository_file("cases/cylinder-shedding.toml"), overrides);
     StructuredGrid grid = build_mesh(spec).grid;
-    const bool unsteady = spec.run.mode == "unsteady";
+    const bool unsteady = spec.run.mode == TimeMode::time_accurate;
     std::optional<ControlVolumeHistory> routes;
     const Simulation* running = nullptr;
     SimulationOptions o;

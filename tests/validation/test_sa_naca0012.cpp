@@ -38,6 +38,7 @@
 #include "mesh/wall_spacing.hpp"
 #include "postprocess/surface_forces.hpp"
 #include "solver/flow_solver.hpp"
+#include "solver/spalart_allmaras_model.hpp"
 #include "test_sa_gci.hpp"
 
 namespace veer {
@@ -74,7 +75,7 @@ struct AirfoilResult {
 AirfoilResult run_airfoil(const StructuredGrid& grid, double alpha, long max_steps) {
     SolverSettings s;
     s.mode = TimeMode::steady;
-    s.turbulence = TurbulenceModelKind::spalart_allmaras;
+    s.model = spalart_allmaras_descriptor();
     const FlowConditions conditions{reynolds, alpha};
     const auto start = std::chrono::steady_clock::now();
     FlowSolver solver(grid, conditions, s);
@@ -86,9 +87,7 @@ AirfoilResult run_airfoil(const StructuredGrid& grid, double alpha, long max_ste
         if (!r.finite) break;
         out.forces = integrate_surface_forces(grid, metrics, solver.fields(), conditions);
         out.steps = n + 1;
-        out.converged =
-            monitor.add({r.residual_u, r.residual_v, r.residual_continuity, out.forces.cl.total,
-                         out.forces.cd.total, r.residual_nu_tilde});
+        out.converged = monitor.add({step_residuals(r), out.forces.cl.total, out.forces.cd.total});
     }
     out.seconds = std::chrono::duration<double>(std::chrono::steady_clock::now() - start).count();
     return out;

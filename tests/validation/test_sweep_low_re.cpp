@@ -31,8 +31,8 @@
 #include "app/report_csv.hpp"
 #include "app/sweep_angles.hpp"
 #include "app/sweep_record.hpp"
-#include "app/sweep_unsteady_stats.hpp"
 #include "io/json_writer.hpp"
+#include "postprocess/time_average.hpp"
 
 namespace veer {
 namespace {

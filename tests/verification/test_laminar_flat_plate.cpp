@@ -54,7 +54,7 @@ PlateRun run_plate(const StructuredGrid& grid) {
         for (const WallFaceState& f : evaluate_wall_faces(grid, metrics, solver.fields(),
                                                           conditions, WallPressure::extrapolated))
             drag += 2.0 * f.shear * f.length;
-        out.converged = monitor.add({r.residual_u, r.residual_v, r.residual_continuity, 0.0, drag});
+        out.converged = monitor.add({step_residuals(r), 0.0, drag});
         out.steps = r.step;
     }
     out.wall =

@@ -1,7 +1,6 @@
 #pragma once
 /// Shared helpers of the app tests: a scratch folder per test, small files written by hand.
 #include <gtest/gtest.h>
-
 #include <unistd.h>
 
 #include <filesystem>

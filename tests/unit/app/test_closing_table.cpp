@@ -4,8 +4,8 @@
 #include <cstdio>
 #include <string>
 
+#include "app/closing_table.hpp"
 #include "app/run_report.hpp"
-#include "app/run_tables.hpp"
 
 namespace veer {
 namespace {
@@ -22,10 +22,12 @@ std::string printed_table(const RunAnalysis& a) {
 RunAnalysis with_lift(double surface_cl, double contour_cl) {
     RunAnalysis a;
     a.forces.cl.total = surface_cl;
-    ContourForces m;
+    RouteComparison m;
     m.contour.distance = 4.0;
-    m.cl.total = contour_cl;
-    a.momentum.push_back(m);
+    m.cl_momentum = contour_cl;
+    m.cl_momentum_difference = contour_cl - surface_cl;
+    a.routes.push_back(m);
+    a.max_lift_disagreement = largest_lift_disagreement(a.routes);
     return a;
 }
 

@@ -22,7 +22,7 @@ ConvergenceCriteria quick_criteria() {
 /// the model; constant forces.
 ConvergenceSample sample(long step, double flow, double nu_tilde) {
     const double f = step <= 3 ? 1.0 : flow, n = step <= 3 ? 1.0 : nu_tilde;
-    return {f, f, f, 0.5, 0.01, n};
+    return {{f, f, f, n}, 0.5, 0.01};
 }
 
 int steps_to_converge(ConvergenceMonitor& m, double flow, double nu_tilde, int cap) {
@@ -52,7 +52,7 @@ TEST(ConvergenceMonitor, RaisedReferencesJudgeAContinuedRun) {
     auto continued = [](ConvergenceMonitor& m) {
         for (int n = 1; n <= 50; ++n) {
             const double r = n <= 3 ? 1e-2 : 1e-4;
-            if (m.add({r, r, r, 0.5, 0.01, r})) return n;
+            if (m.add({{r, r, r, r}, 0.5, 0.01})) return n;
         }
         return -1;
     };
@@ -93,7 +93,7 @@ TEST(ConvergenceMonitor, OlderRecordWithoutNuTildeLoads) {
     EXPECT_EQ(m.count(), 4);
     EXPECT_DOUBLE_EQ(m.relative_residual(), 0.5);
     // Its references are kept: u at 1e-3 of 1, v of 2, continuity of 3 is the largest ratio.
-    m.add({1e-3, 2e-3, 6e-3, 0.5, 0.01, 0.0});
+    m.add({{1e-3, 2e-3, 6e-3, 0.0}, 0.5, 0.01});
     EXPECT_DOUBLE_EQ(m.relative_residual(), 2e-3);
 }
 

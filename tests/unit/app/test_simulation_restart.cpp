@@ -24,19 +24,24 @@ CaseSpec small_case(const std::string& mode, long steps, const std::string& mode
         "small.toml", ".");
 }
 
-/// The checkpoint and history of a run as an older veer wrote them: the convergence record
-/// without the nu_tilde reference (count, three references, relative residual, Cl/Cd pairs)
-/// and history.csv without the nu_tilde column.
-void make_legacy(const std::filesystem::path& dir) {
+/// The convergence record of the checkpoint in DIR rewritten by `rewrite` from the current
+/// layout: marker -3, count, n, n references, relative residual, then (Cl, Cd) pairs.
+template <class Rewrite>
+void rewrite_record(const std::filesystem::path& dir, Rewrite rewrite) {
     CheckpointData c = read_checkpoint(dir / "checkpoint.h5");
     for (NamedArray& a : c.arrays)
         if (a.name == "simulation_convergence") {
-            std::vector<double> old = {a.values[1], a.values[2], a.values[3], a.values[4],
-                                       a.values[6]};
-            old.insert(old.end(), a.values.begin() + 7, a.values.end());
-            a.values = old;
+            const auto n = static_cast<std::size_t>(a.values[2]);
+            const std::vector<double> refs(a.values.begin() + 3, a.values.begin() + 3 + n);
+            const std::vector<double> pairs(a.values.begin() + 4 + static_cast<long>(n),
+                                            a.values.end());
+            a.values = rewrite(a.values[1], refs, a.values[3 + n], pairs);
         }
     write_checkpoint(dir / "checkpoint.h5", c);
+}
+
+/// history.csv of DIR with its last column dropped (all lines).
+void drop_last_history_column(const std::filesystem::path& dir) {
     std::string text = test::read_text(dir / "history.csv"), out;
     std::size_t at = 0;
     while (at < text.size()) {
@@ -46,6 +51,21 @@ void make_legacy(const std::filesystem::path& dir) {
         at = end + 1;
     }
     test::write_text(dir / "history.csv", out);
+}
+
+/// The checkpoint and history of a run as the oldest veer wrote them: the convergence record
+/// without the model's reference (count, three references, relative residual, Cl/Cd pairs)
+/// and history.csv without the model's column.
+void make_legacy(const std::filesystem::path& dir) {
+    rewrite_record(dir, [](double count, const std::vector<double>& refs, double relative,
+                           const std::vector<double>& pairs) {
+        std::vector<double> old = {count, refs[0], refs[1], refs[2], relative};
+        old.insert(old.end(), pairs.begin(), pairs.end());
+        return old;
+    });
+    const std::string history = test::read_text(dir / "history.csv");
+    if (history.substr(0, history.find('\n')).ends_with(",residual_nu_tilde"))
+        drop_last_history_column(dir);
 }
 
 bool same_bits(const std::vector<NamedArray>& a, const std::vector<NamedArray>& b) {
@@ -116,7 +136,7 @@ TEST(SimulationRestart, SpalartAllmarasRunContinuesBitForBit) {
     EXPECT_NE(history.find(",residual_nu_tilde\n"), std::string::npos);
 }
 
-TEST(SimulationRestart, OlderLaminarCheckpointResumesWithTheHistoryPadded) {
+TEST(SimulationRestart, OlderLaminarCheckpointResumes) {
     test::AppScratch scratch;
     SimulationOptions quiet;
     quiet.progress = false;
@@ -131,13 +151,75 @@ TEST(SimulationRestart, OlderLaminarCheckpointResumesWithTheHistoryPadded) {
     Simulation resumed(whole, saved.grid, scratch.path(), quiet);
     resumed.resume(saved);
     EXPECT_EQ(resumed.run().steps, 33);
+    // A laminar run has no model column; rows 1-30 are kept, 31-33 appended.
+    const std::string history = test::read_text(scratch / "history.csv");
+    EXPECT_EQ(history.substr(0, history.find('\n')),
+              "step,time,residual_u,residual_v,residual_continuity,cl,cd,cm");
+    EXPECT_NE(history.find("\n30,"), std::string::npos);
+    EXPECT_NE(history.find("\n33,"), std::string::npos);
+}
+
+TEST(SimulationRestart, LaminarCheckpointOfTheFourSlotMonitorResumes) {
+    // The layout of the release before the model interface: the record's fourth reference (the
+    // model's, 0 when laminar) after marker -2, and history.csv with a zero residual_nu_tilde
+    // column, which a laminar run no longer writes.
+    test::AppScratch scratch;
+    SimulationOptions quiet;
+    quiet.progress = false;
+    const CaseSpec part = small_case("steady", 30);
+    {
+        Simulation first(part, build_mesh(part).grid, scratch.path(), quiet);
+        ASSERT_EQ(first.run().steps, 30);
+    }
+    rewrite_record(scratch.path(), [](double count, const std::vector<double>& refs,
+                                      double relative, const std::vector<double>& pairs) {
+        std::vector<double> old = {-2.0, count, refs[0], refs[1], refs[2], 0.0, relative};
+        old.insert(old.end(), pairs.begin(), pairs.end());
+        return old;
+    });
+    std::string text = test::read_text(scratch / "history.csv"), padded;
+    for (std::size_t at = 0; at < text.size();) {
+        const std::size_t end = text.find('\n', at);
+        padded += text.substr(at, end - at) + (at == 0 ? ",residual_nu_tilde\n" : ",0.0\n");
+        at = end + 1;
+    }
+    test::write_text(scratch / "history.csv", padded);
+    const CheckpointData saved = read_checkpoint(scratch / "checkpoint.h5");
+    Simulation resumed(small_case("steady", 33), saved.grid, scratch.path(), quiet);
+    resumed.resume(saved);
+    EXPECT_EQ(resumed.run().steps, 33);
+    const std::string history = test::read_text(scratch / "history.csv");
+    EXPECT_EQ(history.substr(0, history.find('\n')),
+              "step,time,residual_u,residual_v,residual_continuity,cl,cd,cm");
+    EXPECT_EQ(history.find(",0.0\n"), std::string::npos);  // the old column is left out
+    EXPECT_NE(history.find("\n30,"), std::string::npos);
+}
+
+TEST(SimulationRestart, HistoryWithoutTheModelColumnIsPadded) {
+    // An SA run whose history lacks the model's column (written before it was recorded):
+    // the kept rows read "nan" there (not recorded), the new ones the residual.
+    test::AppScratch scratch;
+    SimulationOptions quiet;
+    quiet.progress = false;
+    const CaseSpec part = small_case("steady", 15, "spalart-allmaras");
+    {
+        Simulation first(part, build_mesh(part).grid, scratch.path(), quiet);
+        ASSERT_EQ(first.run().steps, 15);
+    }
+    drop_last_history_column(scratch.path());
+    const CheckpointData saved = read_checkpoint(scratch / "checkpoint.h5");
+    Simulation resumed(small_case("steady", 18, "spalart-allmaras"), saved.grid, scratch.path(),
+                       quiet);
+    resumed.resume(saved);
+    EXPECT_EQ(resumed.run().steps, 18);
     const std::string history = test::read_text(scratch / "history.csv");
     EXPECT_EQ(history.substr(0, history.find('\n')),
               "step,time,residual_u,residual_v,residual_continuity,cl,cd,cm,residual_nu_tilde");
-    // Rows 1-30 from the older file: nu_tilde not recorded; rows 31-33 new: laminar, 0.
-    EXPECT_NE(history.find("\n30,"), std::string::npos);
-    EXPECT_NE(history.substr(history.find("\n30,")).find(",nan\n31,"), std::string::npos);
-    EXPECT_NE(history.find(",0.000000e+00\n"), std::string::npos);
+    EXPECT_NE(history.find("\n15,"), std::string::npos);
+    EXPECT_NE(history.substr(history.find("\n15,")).find(",nan\n16,"), std::string::npos);
+    const std::string row_16 = history.substr(history.find("\n16,") + 1);
+    EXPECT_NE(row_16.substr(0, row_16.find('\n')).find("e-"), std::string::npos) << row_16;
+    EXPECT_EQ(row_16.substr(0, row_16.find('\n')).find("nan"), std::string::npos) << row_16;
 }
 
 TEST(SimulationRestart, OlderSpalartAllmarasCheckpointIsRefusedClearly) {

@@ -104,11 +104,11 @@ TEST(SweepPlateau, StalledSteadyPointGoesTimeAccurateAtTheStall) {
     std::string text = test::tiny_case_text();
     text.replace(text.find("steps = 5"), 9, "steps = 500\nend_time = 0.05");
     test::write_text(tmp / "c.toml", text);
-    SweepCase sweep{tmp / "c.toml", {}, 0, 0.0, false};
+    SweepCase sweep{read_case_source(tmp / "c.toml"), {}, 0, 0.0, false};
     sweep.plateau = {20, 1e30, 0.0, 10};
-    const CaseSpec spec = read_case_file(sweep.case_file, point_overrides(sweep, 4.0));
+    const CaseSpec spec = point_case(sweep, 4.0);
     const StructuredGrid grid = build_mesh(spec).grid;
-    const PointOutcome out = run_sweep_point(sweep, 4.0, grid, tmp / "sw", nullptr, "");
+    const PointOutcome out = run_sweep_point(sweep, 4.0, spec, grid, tmp / "sw", nullptr, "");
     ASSERT_TRUE(out.record);
     const PointRecord& r = *out.record;
     EXPECT_NE(r.note.find("stalled"), std::string::npos) << r.note;

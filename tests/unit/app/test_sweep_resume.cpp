@@ -24,7 +24,7 @@ PointRecord made_up_point(const SweepCase& sweep, double alpha) {
     r.cd = 1.0;
     r.cm = -1.0;
     r.status = "converged";
-    r.case_text = point_case_text(sweep, alpha);
+    r.case_text = point_case(sweep, alpha).text;
     return r;
 }
 
@@ -41,24 +41,24 @@ void make_finished(const std::filesystem::path& sweep_dir, const PointRecord& r,
 TEST(SweepResume, FinishedPointIsFoundOnlyForTheSameCase) {
     test::AppScratch tmp;
     test::write_text(tmp / "c.toml", test::tiny_case_text());
-    SweepCase sweep{tmp / "c.toml", {}, 0, 0.0, false};
+    SweepCase sweep{read_case_source(tmp / "c.toml"), {}, 0, 0.0, false};
     const PointRecord r = made_up_point(sweep, 4.0);
     make_finished(tmp / "sw", r, tmp / "c.toml");
     const auto dir = tmp / "sw" / r.folder;
-    EXPECT_TRUE(finished_point(dir, point_case_text(sweep, 4.0)));
+    EXPECT_TRUE(finished_point(dir, point_case(sweep, 4.0).text));
     // Another angle, another --set, or a lost summary.json: not finished.
-    EXPECT_FALSE(finished_point(dir, point_case_text(sweep, 6.0)));
+    EXPECT_FALSE(finished_point(dir, point_case(sweep, 6.0).text));
     SweepCase other = sweep;
     other.overrides = {"flow.reynolds=500"};
-    EXPECT_FALSE(finished_point(dir, point_case_text(other, 4.0)));
+    EXPECT_FALSE(finished_point(dir, point_case(other, 4.0).text));
     std::filesystem::remove(dir / "summary.json");
-    EXPECT_FALSE(finished_point(dir, point_case_text(sweep, 4.0)));
+    EXPECT_FALSE(finished_point(dir, point_case(sweep, 4.0).text));
 }
 
 TEST(SweepResume, SweepOfFinishedPointsRunsNothing) {
     test::AppScratch tmp;
     test::write_text(tmp / "c.toml", test::tiny_case_text());
-    SweepCase sweep{tmp / "c.toml", {}, 0, 0.0, false};
+    SweepCase sweep{read_case_source(tmp / "c.toml"), {}, 0, 0.0, false};
     SweepOptions o;
     o.input.case_file = tmp / "c.toml";
     o.alpha = "0:8:4";
@@ -78,7 +78,7 @@ TEST(SweepResume, SweepOfFinishedPointsRunsNothing) {
 TEST(SweepResume, GatherWritesThePolarOfWhatIsThere) {
     test::AppScratch tmp;
     test::write_text(tmp / "c.toml", test::tiny_case_text());
-    SweepCase sweep{tmp / "c.toml", {}, 0, 0.0, false};
+    SweepCase sweep{read_case_source(tmp / "c.toml"), {}, 0, 0.0, false};
     SweepOptions o;
     o.input.case_file = tmp / "c.toml";
     o.alpha = "0,2,4";

@@ -6,7 +6,7 @@
 #include <numbers>
 #include <random>
 
-#include "app/sweep_unsteady_stats.hpp"
+#include "postprocess/time_average.hpp"
 
 namespace veer {
 namespace {
@@ -85,8 +85,8 @@ TEST(UnsteadyStats, CrossingsUseHysteresis) {
         if (k % 100 == 49) v = -0.1;
         s.push_back(v);
     }
-    EXPECT_EQ(upward_level_crossings(t, s, 0.0, 0.5).size(), 4u);
-    EXPECT_EQ(upward_level_crossings(t, s, 0.0, 0.0).size(), 8u);
+    EXPECT_EQ(upward_crossings(t, s, 0.0, 0.5).size(), 4u);
+    EXPECT_EQ(upward_crossings(t, s, 0.0, 0.0).size(), 8u);
 }
 
 TEST(UnsteadyStats, DominantFrequencyNeedsSamples) {

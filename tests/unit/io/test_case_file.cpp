@@ -44,8 +44,8 @@ TEST(CaseFile, ReadsTheDocumentedKeys) {
     EXPECT_DOUBLE_EQ(c.mesh.first_cell, 2e-4);
     EXPECT_DOUBLE_EQ(c.flow.reynolds, 1000.0);
     EXPECT_DOUBLE_EQ(c.flow.alpha_deg, 4.0);
-    EXPECT_EQ(c.model, "laminar");
-    EXPECT_EQ(c.run.mode, "steady");
+    EXPECT_EQ(c.model.name, "laminar");
+    EXPECT_EQ(c.run.mode, TimeMode::steady);
     EXPECT_EQ(c.text, minimal_case);
 }
 
@@ -152,7 +152,7 @@ TEST(CaseFile, CommandLineOverridesReplaceValues) {
     const CaseSpec c =
         parse_case_text(minimal_case, "case.toml", ".", {"flow.alpha=-6", "run.mode=unsteady"});
     EXPECT_DOUBLE_EQ(c.flow.alpha_deg, -6.0);
-    EXPECT_EQ(c.run.mode, "unsteady");
+    EXPECT_EQ(c.run.mode, TimeMode::time_accurate);
     EXPECT_NE(c.text.find("unsteady"), std::string::npos);
     EXPECT_NE(error_of(minimal_case, {"flow.alpha"}).find("table.key=value"), std::string::npos);
     EXPECT_NE(error_of(minimal_case, {"mesh.nonsense=3"}).find("nonsense"), std::string::npos);
@@ -168,6 +168,40 @@ TEST(CaseFile, SpalartAllmarasDefaultsToYPlusOne) {
     EXPECT_NE(error_of(std::string(minimal_case) + "[post]\ncontours = [0.5, 50]\n")
                   .find("outside the grid"),
               std::string::npos);
+}
+
+TEST(CaseFile, ChoiceKeysAreTypedWithOneSpelling) {
+    const CaseSpec c = parse_case_text(
+        std::string(minimal_case) + "[run]\nmode = \"unsteady\"\npressure_solver = \"eigen-cg\"\n",
+        "case.toml", ".");
+    EXPECT_EQ(c.run.mode, TimeMode::time_accurate);
+    EXPECT_EQ(c.run.pressure_solver, PressureSolverKind::eigen_cg);
+    EXPECT_EQ(
+        parse_case_text(minimal_case, "case.toml", ".", {"run.pressure_solver=eigen-bicgstab"})
+            .run.pressure_solver,
+        PressureSolverKind::eigen_bicgstab);
+    EXPECT_EQ(parse_case_text(minimal_case, "case.toml", ".", {"geometry.trailing_edge=closed"})
+                  .geometry.trailing_edge,
+              TrailingEdge::closed);
+    // The underscore spelling the solver once took is refused, naming the line, the value and
+    // the words allowed.
+    const std::string msg =
+        error_of(std::string(minimal_case) + "[run]\npressure_solver = \"eigen_cg\"\n");
+    EXPECT_NE(msg.find("case.toml:14"), std::string::npos) << msg;
+    EXPECT_NE(msg.find("\"eigen_cg\""), std::string::npos) << msg;
+    EXPECT_NE(msg.find("\"multigrid\", \"eigen-cg\" or \"eigen-bicgstab\""), std::string::npos)
+        << msg;
+    EXPECT_NE(error_of(minimal_case, {"flow.model=k-epsilon"}).find("\"spalart-allmaras\""),
+              std::string::npos);
+}
+
+TEST(CaseFile, SteadyCflBelowThePressureSmoothingLimitIsRefused) {
+    // rhie_chow_scale 0.5: the steady pseudo CFL must exceed 0.25 (solver/README.md).
+    const std::string msg = error_of(minimal_case, {"run.cfl=0.2"});
+    EXPECT_NE(msg.find("cfl = 0.2"), std::string::npos) << msg;
+    EXPECT_NE(msg.find("above 0.25"), std::string::npos) << msg;
+    EXPECT_EQ(error_of(minimal_case, {"run.cfl=0.3"}), "");
+    EXPECT_EQ(error_of(minimal_case, {"run.cfl=0.2", "run.mode=unsteady"}), "");
 }
 
 TEST(CaseFile, InvalidTomlGivesLine) {

@@ -7,6 +7,7 @@
 
 #include "mesh/structured_grid.hpp"
 #include "solver/flow_solver.hpp"
+#include "solver/spalart_allmaras_model.hpp"
 
 namespace veer {
 namespace {
@@ -93,7 +94,7 @@ TEST(Restart, TurbulenceModelStateIsPartOfTheRestart) {
     SolverSettings s;
     s.mode = TimeMode::steady;
     s.local_step_interval = 7;
-    s.turbulence = TurbulenceModelKind::spalart_allmaras;
+    s.model = spalart_allmaras_descriptor();
     FlowSolver whole(g, {1e5, 0.0}, s);
     step(whole, TimeMode::steady, 20);
     FlowSolver first(g, {1e5, 0.0}, s);
@@ -103,8 +104,12 @@ TEST(Restart, TurbulenceModelStateIsPartOfTheRestart) {
     step(second, TimeMode::steady, 12);
     expect_same_bits(whole.fields(), second.fields());
     const FlowFields a = whole.fields(), b = second.fields();
-    ASSERT_EQ(a.nu_tilde.size(), 256u);
-    for (std::size_t k = 0; k < a.nu_tilde.size(); ++k) EXPECT_EQ(a.nu_tilde[k], b.nu_tilde[k]);
+    ASSERT_EQ(a.model_fields.size(), 1u);
+    ASSERT_EQ(a.model_fields[0].name, "nu_tilde");
+    ASSERT_EQ(b.model_fields.size(), 1u);
+    const std::vector<double>&nt_a = a.model_fields[0].values, &nt_b = b.model_fields[0].values;
+    ASSERT_EQ(nt_a.size(), 256u);
+    for (std::size_t k = 0; k < nt_a.size(); ++k) EXPECT_EQ(nt_a[k], nt_b[k]);
 }
 
 TEST(Restart, MissingArrayIsAnInputErrorNamingIt) {

@@ -12,8 +12,10 @@
 #include "solver/boundary_faces.hpp"
 #include "solver/connectivity.hpp"
 #include "solver/face_geometry.hpp"
+#include "solver/model_registry.hpp"
 #include "solver/solver_settings.hpp"
-#include "solver/turbulence_model.hpp"
+#include "solver/spalart_allmaras.hpp"
+#include "solver/spalart_allmaras_model.hpp"
 
 namespace veer {
 namespace {
@@ -55,8 +57,8 @@ struct CGridCase {
                 local_dt(i, j) = cfl * std::sqrt(geom.volume[geom.cell(i, j)]);
     }
 
-    TurbulenceInputs inputs() {
-        TurbulenceInputs in;
+    ModelStepInputs inputs() {
+        ModelStepInputs in;
         in.u = u.view();
         in.v = v.view();
         in.flux_i = &flux_i;
@@ -132,19 +134,25 @@ TEST(SpalartAllmarasModel, WallValueIsZeroAndFreeStreamValueHolds) {
 }
 
 TEST(TurbulenceModel, LaminarGivesZerosAndNamesParse) {
-    TurbulenceModel model = Laminar{};
-    EXPECT_FALSE(has_eddy_viscosity(model));
-    const std::vector<double> nut = eddy_viscosity(model, 7);
-    EXPECT_EQ(nut, std::vector<double>(7, 0.0));
-    EXPECT_TRUE(nu_tilde(model).empty());
+    CGridCase c;
+    const std::size_t cells = c.geom.volume.size();
+    const std::unique_ptr<FlowModel> model = model_named("laminar").make(
+        ModelSetup{c.grid, c.metrics, c.geom, c.faces, c.connectivity, nu});
+    EXPECT_FALSE(model->has_eddy_viscosity());
+    const std::vector<double> nut = model->eddy_viscosity();
+    EXPECT_EQ(nut, std::vector<double>(cells, 0.0));
+    EXPECT_TRUE(model->values().empty());
+    EXPECT_TRUE(model->variables().empty());
     std::vector<double> on_i(3, 1.0), on_j(4, 1.0);
-    face_eddy_viscosity(model, on_i, on_j);
+    model->face_eddy_viscosity(on_i, on_j);
     EXPECT_EQ(on_i, std::vector<double>(3, 0.0));
     EXPECT_EQ(on_j, std::vector<double>(4, 0.0));
-    EXPECT_EQ(advance(model, TurbulenceInputs{}).residual, 0.0);
-    EXPECT_EQ(turbulence_model_kind("laminar"), TurbulenceModelKind::laminar);
-    EXPECT_EQ(turbulence_model_kind("spalart-allmaras"), TurbulenceModelKind::spalart_allmaras);
-    EXPECT_THROW(turbulence_model_kind("k-epsilon"), InputError);
+    EXPECT_TRUE(model->advance(ModelStepInputs{}).residuals.empty());
+    ASSERT_NE(find_model("laminar"), nullptr);
+    EXPECT_EQ(find_model("laminar")->name, "laminar");
+    ASSERT_NE(find_model("spalart-allmaras"), nullptr);
+    EXPECT_EQ(find_model("spalart-allmaras")->name, "spalart-allmaras");
+    EXPECT_EQ(find_model("k-epsilon"), nullptr);
 }
 
 TEST(TurbulenceModel, PseudoCflDefaultsByModelAndAnExplicitOneWins) {
@@ -152,9 +160,9 @@ TEST(TurbulenceModel, PseudoCflDefaultsByModelAndAnExplicitOneWins) {
     // on a y+ 1 grid (solver_settings.hpp); the laminar one is unchanged.
     SolverSettings s;
     EXPECT_EQ(effective_pseudo_cfl(s), laminar_pseudo_cfl);
-    s.turbulence = TurbulenceModelKind::spalart_allmaras;
-    EXPECT_EQ(effective_pseudo_cfl(s), turbulent_pseudo_cfl);
-    EXPECT_LT(turbulent_pseudo_cfl, laminar_pseudo_cfl);
+    s.model = spalart_allmaras_descriptor();
+    EXPECT_EQ(effective_pseudo_cfl(s), spalart_allmaras_pseudo_cfl);
+    EXPECT_LT(spalart_allmaras_pseudo_cfl, laminar_pseudo_cfl);
     s.pseudo_cfl = 7.5;
     EXPECT_EQ(effective_pseudo_cfl(s), 7.5);
 }

@@ -23,7 +23,6 @@
 #include "solver/face_geometry.hpp"
 #include "solver/spalart_allmaras.hpp"
 #include "solver/spalart_allmaras_terms.hpp"
-#include "solver/turbulence_model.hpp"
 
 namespace veer {
 namespace {
@@ -57,8 +56,8 @@ struct Block {
         local_dt = CellField(grid.ni(), grid.nj(), 0.0);
     }
 
-    TurbulenceInputs inputs() {
-        TurbulenceInputs in;
+    ModelStepInputs inputs() {
+        ModelStepInputs in;
         in.u = u.view();
         in.v = v.view();
         in.flux_i = &flux_i;

@@ -1,13 +1,11 @@
-#include "app/run_tables.hpp"
+#include "app/closing_table.hpp"
 
 #include <fmt/format.h>
 
-#include <algorithm>
 #include <cmath>
+#include <string>
 
 #include "app/run_report.hpp"
-#include "io/atomic_file.hpp"
-#include "io/vtk_grid_writer.hpp"
 
 namespace veer {
 namespace {
@@ -16,48 +14,14 @@ namespace {
 /// one degree on a thin section, 2 pi per radian: common practice for "no lift").
 constexpr double near_zero_lift = 1e-4;
 
-std::string surface_rows(const std::vector<SurfacePoint>& side, const char* name) {
-    std::string out;
-    for (const SurfacePoint& p : side)
-        out += fmt::format("{:.8f},{:.8f},{},{:.8e},{:.8e},{:.6e}\n", p.x, p.y, name, p.cp, p.cf,
-                           p.y_plus);
+std::string separation_text(const SurfaceSeparation& s) {
+    if (s.separations.empty()) return "attached";
+    std::string out = fmt::format("separates at x/c {:.3f}", s.separations.front().x);
+    if (s.trailing_edge_separation) out += ", reversed to the trailing edge";
+    for (const SeparationBubble& b : s.bubbles)
+        out += fmt::format(", bubble {:.3f}-{:.3f}", b.start.x, b.end.x);
     return out;
 }
-
-}  // namespace
-
-void write_surface_csv(const std::filesystem::path& path, const SurfaceDistribution& d) {
-    write_text_atomically(path, "x_c,y_c,side,cp,cf,y_plus\n" + surface_rows(d.lower, "lower") +
-                                    surface_rows(d.upper, "upper"));
-}
-
-void write_wake_csv(const std::filesystem::path& path, const std::vector<WakeProfile>& wake) {
-    std::string out = "station,x,y,u,v,flow_angle_deg,cp\n";
-    for (const WakeProfile& w : wake)
-        for (const WakeSample& s : w.samples)
-            out += fmt::format("{:g},{:.8f},{:.8f},{:.8e},{:.8e},{:.6f},{:.8e}\n", w.station, w.x,
-                               s.y, s.u, s.v, s.flow_angle_deg, 2.0 * s.pressure);
-    write_text_atomically(path, out);
-}
-
-void write_surface_vtp_file(const std::filesystem::path& path, const SurfaceDistribution& d) {
-    std::vector<Vec2> points;
-    std::vector<double> cp, cf, y_plus;
-    auto add = [&](const std::vector<SurfacePoint>& side) {
-        for (const SurfacePoint& p : side) {
-            points.push_back({p.x, p.y});
-            cp.push_back(p.cp);
-            cf.push_back(p.cf);
-            y_plus.push_back(p.y_plus);
-        }
-    };
-    add(d.lower);
-    add(d.upper);
-    write_surface_vtp(path, points, {{"Cp", 1, &cp}, {"Cf", 1, &cf}, {"y_plus", 1, &y_plus}},
-                      {0, d.lower.size()});
-}
-
-namespace {
 
 /// The reference length's name in the table's words.
 const char* lengths(const CaseSpec& spec) { return spec.geometry.circle ? "diameters" : "chords"; }
@@ -68,19 +32,14 @@ void print_routes(const CaseSpec& spec, const RunAnalysis& a, bool unsteady) {
     fmt::print("  {:<34} {:>10} {:>10} {:>10}\n", "route", "Cl", "Cd", "dCl");
     fmt::print("  {:<34} {:>10.5f} {:>10.5f} {:>10}\n", "surface (pressure + friction)", cl,
                a.forces.cd.total, "-");
-    double worst = 0.0;
-    for (std::size_t k = 0; k < a.momentum.size(); ++k) {
-        const ContourForces& m = a.momentum[k];
-        const double diff = m.cl.total - cl;
-        worst = std::max(worst, std::abs(diff));
+    for (const RouteComparison& r : a.routes)
         fmt::print("  {:<34} {:>10.5f} {:>10.5f} {:>+10.5f}\n",
-                   fmt::format("control volume at {:.2f} {}", m.contour.distance, unit), m.cl.total,
-                   m.cd.total, diff);
-    }
-    for (const ContourCirculation& c : a.circulation)
+                   fmt::format("control volume at {:.2f} {}", r.contour.distance, unit),
+                   r.cl_momentum, r.cd_momentum, r.cl_momentum_difference);
+    for (const RouteComparison& r : a.routes)
         fmt::print("  {:<34} {:>10.5f} {:>10} {:>+10.5f}\n",
-                   fmt::format("circulation at {:.2f} {}", c.contour.distance, unit), c.cl, "",
-                   c.cl - cl);
+                   fmt::format("circulation at {:.2f} {}", r.contour.distance, unit),
+                   r.cl_circulation, "", r.cl_circulation_difference);
     if (unsteady) {
         fmt::print(
             "  (this instant: the control-volume rows leave out the rate of change of the "
@@ -88,6 +47,7 @@ void print_routes(const CaseSpec& spec, const RunAnalysis& a, bool unsteady) {
             "time means below)\n");
         return;
     }
+    const double worst = a.max_lift_disagreement;
     // A percentage of a lift near zero (a symmetric section at zero incidence) says nothing.
     if (std::abs(cl) >= near_zero_lift)
         fmt::print("  largest surface/control-volume disagreement: {:.5f} ({:.2f}% of Cl)\n", worst,
@@ -101,16 +61,8 @@ void print_section_lines(const RunAnalysis& a) {
         "  Cm (quarter chord) {:.5f}; Kutta check: Cp upper {:.4f}, lower {:.4f} at the "
         "trailing edge\n",
         a.forces.cm.total, a.kutta.cp_upper, a.kutta.cp_lower);
-    auto sep = [](const SurfaceSeparation& s) {
-        if (s.separations.empty()) return std::string("attached");
-        std::string out = fmt::format("separates at x/c {:.3f}", s.separations.front().x);
-        if (s.trailing_edge_separation) out += ", reversed to the trailing edge";
-        for (const SeparationBubble& b : s.bubbles)
-            out += fmt::format(", bubble {:.3f}-{:.3f}", b.start.x, b.end.x);
-        return out;
-    };
-    fmt::print("  upper surface {}; lower surface {}\n", sep(a.separation.upper),
-               sep(a.separation.lower));
+    fmt::print("  upper surface {}; lower surface {}\n", separation_text(a.separation.upper),
+               separation_text(a.separation.lower));
     for (const WakeProfile& w : a.wake)
         fmt::print(
             "  wake {:.2f} chords behind the TE: downwash {:+.3f} deg, downward momentum "
@@ -182,7 +134,7 @@ void print_closing_table(const CaseSpec& spec, const RunAnalysis& a, const Unste
         "  cautions: 2D and incompressible; the {} model has its limits; check grid and time-step "
         "convergence before relying on a figure; not a substitute for testing and licensed "
         "engineering review of anything that flies\n",
-        spec.model);
+        spec.model.name);
 }
 
 }  // namespace veer

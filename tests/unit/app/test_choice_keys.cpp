@@ -1,0 +1,134 @@
+// `veer check` and `veer run` accept and refuse the same case values: every choice key with
+// every word it takes and with near misses of those words (the other separator, a capital, a
+// word of another key), and the rules run applies beyond the reader's (the steady CFL limit,
+// the places of the analysis). Each value goes in through --set, as a user would try it.
+#include <gtest/gtest.h>
+
+#include <algorithm>
+#include <cctype>
+#include <cmath>
+#include <fmt/format.h>
+#include <set>
+
+#include "app/commands.hpp"
+#include "app_test_support.hpp"
+#include "io/case_choices.hpp"
+#include "mesh/errors.hpp"
+
+namespace veer {
+namespace {
+
+/// Whether a command accepted the case (no InputError, not exit status 2).
+template <class Command>
+bool accepted(Command command) {
+    try {
+        return command() != 2;
+    } catch (const InputError&) {
+        return false;
+    }
+}
+
+struct Verdicts {
+    bool check = false, run = false;
+};
+
+/// The tiny case with its section from a coordinate file (NACA 0012 thickness, 41 points on
+/// a cosine spacing, closed at the trailing edge): [geometry] chord_line needs coordinates.
+std::string tiny_file_case_text(const test::AppScratch& scratch) {
+    std::string dat = "tiny section\n";
+    constexpr int n = 20;
+    for (int side : {1, -1})
+        for (int k = 0; k <= n; ++k) {
+            const int m = side > 0 ? n - k : k;
+            if (side < 0 && m == 0) continue;  // the nose once
+            const double x = 0.5 * (1.0 - std::cos(M_PI * m / n));
+            const double t = 0.6 * (0.2969 * std::sqrt(x) - 0.1260 * x - 0.3516 * x * x +
+                                    0.2843 * x * x * x - 0.1036 * x * x * x * x);
+            dat += fmt::format("{:.8f} {:.8f}\n", x, side * t);
+        }
+    test::write_text(scratch / "tiny.dat", dat);
+    std::string text = test::tiny_case_text();
+    const std::string naca = "naca = \"0012\"";
+    text.replace(text.find(naca), naca.size(), "coordinates = \"tiny.dat\"");
+    return text;
+}
+
+/// `veer check` and a one-step `veer run` of the case `name` with `overrides`.
+Verdicts both_paths(const test::AppScratch& scratch, const std::vector<std::string>& overrides,
+                    int& runs, const std::string& name = "tiny.toml") {
+    CaseOptions input{scratch / name, overrides};
+    input.overrides.push_back("run.steps=1");
+    Verdicts v;
+    v.check = accepted([&] { return run_check_command(input); });
+    RunOptions run;
+    run.input = input;
+    run.out_dir = scratch / ("run_" + std::to_string(runs++));
+    run.quiet = true;
+    v.run = accepted([&] { return run_run_command(run); });
+    return v;
+}
+
+/// The words of a key and near misses of them, each once.
+std::vector<std::string> candidates(const ChoiceKey& key) {
+    std::set<std::string> out(key.words.begin(), key.words.end());
+    for (std::string w : key.words) {
+        std::string swapped = w;
+        std::replace(swapped.begin(), swapped.end(), '-', '_');
+        out.insert(swapped);
+        std::replace(swapped.begin(), swapped.end(), '_', ' ');
+        out.insert(swapped);
+        w[0] = static_cast<char>(std::toupper(static_cast<unsigned char>(w[0])));
+        out.insert(w);
+    }
+    out.insert("steady-state");
+    return {out.begin(), out.end()};
+}
+
+TEST(ChoiceKeys, CheckAndRunAgreeOnEveryWordOfEveryChoiceKey) {
+    test::AppScratch scratch;
+    test::write_text(scratch / "tiny.toml", test::tiny_case_text());
+    test::write_text(scratch / "tiny_file.toml", tiny_file_case_text(scratch));
+    const std::vector<ChoiceKey> keys = case_choice_keys();
+    ASSERT_EQ(keys.size(), 5u);  // trailing_edge, chord_line, model, mode, pressure_solver
+    int runs = 0, accepted_words = 0;
+    for (const ChoiceKey& key : keys) {
+        ASSERT_FALSE(key.words.empty()) << key.key;
+        for (const std::string& value : candidates(key)) {
+            const std::string item = key.table + "." + key.key + "=\"" + value + "\"";
+            // chord_line is for coordinate files, trailing_edge for NACA sections.
+            const Verdicts v = both_paths(scratch, {item}, runs,
+                                          key.key == "chord_line" ? "tiny_file.toml" : "tiny.toml");
+            const bool documented =
+                std::find(key.words.begin(), key.words.end(), value) != key.words.end();
+            EXPECT_EQ(v.check, v.run) << item;
+            EXPECT_EQ(v.check, documented) << item;
+            accepted_words += v.check && v.run;
+        }
+    }
+    // open/closed, three chord lines, two models, two modes, three pressure solvers
+    EXPECT_EQ(accepted_words, 2 + 3 + 2 + 2 + 3);
+}
+
+TEST(ChoiceKeys, CheckAppliesTheRulesRunApplies) {
+    test::AppScratch scratch;
+    test::write_text(scratch / "tiny.toml", test::tiny_case_text());
+    int runs = 0;
+    // The steady pressure smoothing needs a pseudo CFL above 0.25; the tiny grid reaches
+    // 10 chords, so a contour or wake station at 50 chords has no grid line.
+    const std::vector<std::pair<std::vector<std::string>, bool>> cases = {
+        {{"run.cfl=0.2"}, false},
+        {{"run.cfl=0.3"}, true},
+        {{"run.cfl=0.2", "run.mode=\"unsteady\""}, true},
+        {{"post.wake_stations=[50.0]"}, false},
+        {{"post.wake_stations=[2.0]"}, true},
+        {{"post.contours=[50.0]"}, false},
+    };
+    for (const auto& [overrides, ok] : cases) {
+        const Verdicts v = both_paths(scratch, overrides, runs);
+        EXPECT_EQ(v.check, ok) << overrides.front();
+        EXPECT_EQ(v.run, ok) << overrides.front();
+    }
+}
+
+}  // namespace
+}  // namespace veer
