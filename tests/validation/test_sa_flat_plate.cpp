@@ -1,6 +1,6 @@
 /// Spalart-Allmaras validation: the zero-pressure-gradient flat plate at Re = 5e6 per unit length
 /// (the NASA Turbulence Modeling Resource case "2D Zero Pressure Gradient Flat Plate", SA
-/// results; values in ../shared/reference/tmr_naca0012_sa.md), with a three-grid convergence
+/// results; values in tests/reference/tmr_flat_plate_sa.csv), with a three-grid convergence
 /// study by the grid convergence index (Celik et al. 2008, J. Fluids Eng. 130, 078001).
 ///
 /// Our set-up: plate from x = 0 to 2, domain height 1; upstream of the plate (x from -0.33 to 0)

@@ -1,5 +1,5 @@
 /// The grid convergence index helper of the SA validation, on the flat-plate SA Cf of the NASA
-/// Turbulence Modeling Resource quoted in ../shared/reference/gci.md [D]: grids of 13056, 52224
+/// Turbulence Modeling Resource in tests/reference/tmr_flat_plate_sa_grid_family.csv [D]: grids of 13056, 52224
 /// and 208896 cells (refinement ratio exactly 2), Cf = 0.0027112, 0.0027067, 0.0027056.
 ///
 /// From these seven-digit values the procedure gives, by hand: p = ln(45 / 11) / ln 2 = 2.0324

@@ -1,6 +1,6 @@
 #pragma once
 /// Grid convergence index of three grids, the procedure of Celik, Ghia, Roache, Freitas, Coleman
-/// & Raad 2008 (J. Fluids Eng. 130, 078001) as ../shared/reference/gci.md writes it; the
+/// & Raad 2008 (J. Fluids Eng. 130, 078001) (steps 1-6 of its procedure); the
 /// safety factor 1.25 for three grids (Roache 2011, J. Fluids Eng. 133(11), 115501).
 #include <array>
 #include <cmath>

@@ -1,7 +1,7 @@
 /// Spalart-Allmaras validation: NACA 0012 at Re = 6e6, alpha = 0, 10 and 15 degrees, fully
 /// turbulent, against the NASA Turbulence Modeling Resource "2D NACA 0012 Airfoil Validation
 /// Case" SA results of seven independent codes on its 897 x 257 grid [P] (band and mean in
-/// ../shared/reference/tmr_naca0012_sa.md).
+/// tests/reference/tmr_naca0012_sa.csv).
 ///
 /// Differences from the resource's case, stated rather than absorbed in the tolerances:
 /// - Mach number: the resource runs M = 0.15 ("essentially incompressible"); veer is

@@ -3,11 +3,11 @@
 /// the steady attempts, the stall detector, the polar figures of summary.json),
 /// against experiment:
 /// - Ladson, C. L. (1988) NASA TM-4074, M = 0.15, Re = 6e6, 80-grit trip [P], as distributed by
-///   the NASA Turbulence Modeling Resource (../shared/reference/ladson1988_naca0012.csv); its
+///   the NASA Turbulence Modeling Resource (tests/reference/ladson1988_naca0012.csv); its
 ///   least-squares lift slopes [D] in that file's header: 0.1080/deg over -4..4 deg, 0.1074/deg
 ///   over -4..10 deg.
 /// - McCroskey, W. J. (1987) NASA TM-100019, best fit of the lift slope at Re = 6e6, M = 0.15:
-///   0.1075/deg [D] (../shared/reference/tmr_naca0012_sa.md).
+///   0.1075/deg [D] (tests/reference/mccroskey1987_lift_slope.csv).
 ///
 /// Mach number: the experiment ran at M = 0.15; veer is incompressible. Our Cl and lift slope
 /// are multiplied by the Prandtl-Glauert factor 1 / sqrt(1 - 0.15^2) = 1.0114 before every

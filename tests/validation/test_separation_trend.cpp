@@ -1,7 +1,7 @@
 /// Separation on laminar NACA 0012 at Re = 1000, a case with a known separated region: "at this
 /// Reynolds number ... flow separation ... is observed even at low angles of attack", and the
 /// unsteady vortex pattern appears at about 8 deg (Kurtulus 2015, Int. J. Micro Air Vehicles
-/// 7(3), 301-326, abstract; shared/reference/low_re.md). Steady runs below that onset, through the
+/// 7(3), 301-326, abstract; tests/reference/kurtulus2015_naca0012_re1000.csv). Steady runs below that onset, through the
 /// `veer run` chain (../verification/run_pipeline.hpp) on the 256 x 64 grid: the upper-surface
 /// separation point (postprocess/separation, the first change of Cf from + to - aft of the
 /// stagnation point, as summary.json's separation_upper) exists at every angle and moves

@@ -3,7 +3,7 @@
 /// field 40 chords), as `veer sweep` runs it: steady attempts, the stall detector, the disturbed
 /// stability check of separated points and the time-accurate continuation.
 ///
-/// Published reference (../shared/reference/low_re.md):
+/// Published reference (tests/reference/kurtulus2015_naca0012_re1000.csv):
 /// - Kurtulus, D. F. (2015) Int. J. Micro Air Vehicles 7(3), 301-326, abstract [P]: 2D laminar
 ///   NACA 0012 at Re = 1000, "the unsteady vortex pattern is observed at about 8 deg".
 /// - Gupta et al. (2023) J. Fluid Mech. map the steady -> periodic wake transition over

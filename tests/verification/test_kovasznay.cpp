@@ -1,5 +1,5 @@
 /// Kovasznay flow at Re = 40 (Kovasznay 1948, Proc. Camb. Phil. Soc. 44, 58-62; formulas and
-/// lambda(40) = -0.963741 in ../shared/reference/analytic.md) on [-0.5, 1] x [-0.5, 1.5], the
+/// lambda(40) = -0.963741 in tests/reference/kovasznay1948.csv) on [-0.5, 1] x [-0.5, 1.5], the
 /// exact velocity prescribed on the sides: the error falls at second order.
 #include <gtest/gtest.h>
 

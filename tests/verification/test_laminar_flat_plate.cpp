@@ -1,7 +1,7 @@
 /// Laminar flat plate at zero incidence: the steady solver's wall shear, evaluated by the same
 /// post-processing as every run report (postprocess/wall_faces), against the Blasius skin
 /// friction Cf = 0.664 / sqrt(Re_x) (Blasius 1908, Z. Math. Phys. 56, 1-37; White, Viscous Fluid
-/// Flow; shared/reference/analytic.md).
+/// Flow; tests/reference/blasius1908_flat_plate.csv).
 ///
 /// Re = 1e5 on the plate length (the issue asks for >= 1e4). Blasius is the first term of the
 /// boundary-layer expansion; the leading-edge correction of the next order raises Cf by about

@@ -1,5 +1,5 @@
-/// Taylor-Green vortex decay (Taylor & Green 1937, Proc. R. Soc. Lond. A 158, 499-521; formulas
-/// in ../shared/reference/analytic.md) on a doubly periodic square: temporal order of BDF2 with
+/// Taylor-Green vortex decay (Taylor & Green 1937, Proc. R. Soc. Lond. A 158, 499-521; the exact
+/// solution is written in the test) on a doubly periodic square: temporal order of BDF2 with
 /// the incremental projection, and agreement with the exact decay.
 #include <gtest/gtest.h>
 

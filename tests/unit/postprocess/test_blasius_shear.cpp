@@ -1,6 +1,6 @@
 // Wall shear of the Blasius boundary layer written onto a flat-plate block: the two-cell
 // reconstruction must return Cf = 0.664 / sqrt(Re_x) (Blasius 1908, f''(0) = 0.332057; values
-// from shared/reference/analytic.md).
+// from tests/reference/blasius1908_flat_plate.csv).
 #include <gtest/gtest.h>
 
 #include <cmath>
