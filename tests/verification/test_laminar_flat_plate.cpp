@@ -1,7 +1,8 @@
 /// Laminar flat plate at zero incidence: the steady solver's wall shear, evaluated by the same
 /// post-processing as every run report (postprocess/wall_faces), against the Blasius skin
 /// friction Cf = 0.664 / sqrt(Re_x) (Blasius 1908, Z. Math. Phys. 56, 1-37; White, Viscous Fluid
-/// Flow; tests/reference/blasius1908_flat_plate.csv).
+/// Flow; tests/reference/blasius1908_flat_plate.csv), and the plate's drag through the surface
+/// force integration (postprocess/surface_forces) against the one-side drag 1.328 / sqrt(Re_L).
 ///
 /// Re = 1e5 on the plate length (the issue asks for >= 1e4). Blasius is the first term of the
 /// boundary-layer expansion; the leading-edge correction of the next order raises Cf by about
@@ -18,21 +19,31 @@
 #include "app/convergence.hpp"
 #include "mesh/grid_metrics.hpp"
 #include "plate_grid.hpp"
+#include "postprocess/surface_forces.hpp"
 #include "postprocess/wall_faces.hpp"
 #include "solver/flow_solver.hpp"
+#include "tests/reference_table.hpp"
 
 namespace veer {
 namespace {
 
 constexpr double reynolds = 1e5;  // per plate length, U_inf = 1
 
-/// Blasius skin friction (analytic.md: Cf = 0.664 / sqrt(Re_x)).
-double blasius_cf(double re_x) { return 0.664 / std::sqrt(re_x); }
+/// Blasius 1908 (blasius1908_flat_plate.csv): local Cf coefficient 0.664, one-side drag 1.328.
+const test::ReferenceTable& blasius() {
+    static const test::ReferenceTable t =
+        test::ReferenceTable::read("blasius1908_flat_plate.csv", 3);
+    return t;
+}
+
+/// Blasius skin friction, Cf = 0.664 / sqrt(Re_x).
+double blasius_cf(double re_x) { return blasius().value("local_cf_coefficient") / std::sqrt(re_x); }
 
 struct PlateRun {
     bool converged = false;
     long steps = 0;
     std::vector<WallFaceState> wall;
+    SurfaceForces forces;  ///< the report's surface integration over the plate
 };
 
 /// Steady pseudo-time marching to the criteria of `veer run` (app/convergence.hpp defaults:
@@ -59,6 +70,7 @@ PlateRun run_plate(const StructuredGrid& grid) {
     }
     out.wall =
         evaluate_wall_faces(grid, metrics, solver.fields(), conditions, WallPressure::extrapolated);
+    out.forces = integrate_surface_forces(grid, metrics, solver.fields(), conditions);
     return out;
 }
 
@@ -97,7 +109,22 @@ TEST(LaminarFlatPlate, SkinFrictionFollowsBlasiusOverTheMiddleOfThePlate) {
         EXPECT_NEAR(q, 1.0, 0.05);
         worst = std::max(worst, std::abs(q - 1.0));
     }
-    std::cout << "  largest deviation over 0.25 <= x <= 0.75: " << 100.0 * worst << "%\n";
+    std::cout << "  compared " << ratios.size() << " wall faces; largest deviation over 0.25 <= x "
+              << "<= 0.75: " << 100.0 * worst << "%\n";
+
+    // The plate's drag through the force integration every run report uses: friction only,
+    // against the Blasius drag of one side, 1.328 / sqrt(Re_L) (blasius1908_flat_plate.csv [D]).
+    const double blasius_drag = blasius().value("one_side_drag_coefficient") / std::sqrt(reynolds);
+    std::cout << "  drag: friction " << r.forces.cd.friction << ", pressure "
+              << r.forces.cd.pressure << "; Blasius " << blasius_drag << " ("
+              << 100.0 * (r.forces.cd.friction / blasius_drag - 1.0) << "%)\n";
+    // 5%, the band of the local Cf above: measured 3.15% high on this grid and 3.17% on the
+    // 240 x 128 one (so not grid error): the local Cf lies 1-1.5% above Blasius over the middle
+    // of the plate and 2-5% above it near the leading edge, where the next-order correction of
+    // the boundary-layer expansion grows (file comment). A flipped, halved or doubled wall shear
+    // is far outside.
+    EXPECT_NEAR(r.forces.cd.friction / blasius_drag, 1.0, 0.05);
+    EXPECT_NEAR(r.forces.cd.pressure, 0.0, 1e-3 * blasius_drag);  // a plate at zero incidence
 
     // The same plate with twice the cells each way and half the first cell: the comparison must
     // not owe its result to the grid. Face k of the coarse grid spans faces 2k, 2k+1 of the fine
@@ -111,6 +138,8 @@ TEST(LaminarFlatPlate, SkinFrictionFollowsBlasiusOverTheMiddleOfThePlate) {
     const PlateRun rf = run_plate(test::flat_plate_grid(fine));
     ASSERT_TRUE(rf.converged) << "fine grid not converged in " << rf.steps << " steps";
     middle_ratios(rf, "laminar flat plate 240x128");
+    std::cout << "  drag on 240x128: friction " << rf.forces.cd.friction << " ("
+              << 100.0 * (rf.forces.cd.friction / blasius_drag - 1.0) << "% from Blasius)\n";
     double largest_change = 0.0;
     for (std::size_t k = 0; k < r.wall.size(); ++k) {
         const double x = r.wall[k].center.x;

@@ -1,22 +1,33 @@
-// NACA sections against their published formulas (reference/sections.md):
+// NACA sections against their published formulas and figures (the figures compared with are in
+// tests/reference/abbott1959_naca_sections.csv and thin_airfoil_camber_lines.csv):
 // Abbott & von Doenhoff 1959, Theory of Wing Sections, sections 6.4-6.5 and chapter 4;
 // Jacobs, Ward & Pinkerton 1933, NACA Report 460; Jacobs & Pinkerton 1935, NACA Report 537.
 #include <gtest/gtest.h>
 
 #include <algorithm>
 #include <cmath>
+#include <iostream>
 #include <numbers>
+#include <string>
 
 #include "mesh/errors.hpp"
 #include "mesh/naca.hpp"
 #include "mesh/section_builder.hpp"
 #include "mesh/spline.hpp"
+#include "tests/reference_table.hpp"
 
 namespace veer {
 namespace {
 
+/// Abbott & von Doenhoff 1959, section 6.4, the figures of the 4-digit sections (4 rows).
+const test::ReferenceTable& abbott() {
+    static const test::ReferenceTable t =
+        test::ReferenceTable::read("abbott1959_naca_sections.csv", 4);
+    return t;
+}
+
 /// The 4-digit thickness formula written out here, independently of the library (Abbott & von
-/// Doenhoff 1959, section 6.4; sections.md).
+/// Doenhoff 1959, section 6.4).
 double thickness_formula(double x, double t, double last) {
     return 5.0 * t *
            (0.2969 * std::sqrt(x) - 0.1260 * x - 0.3516 * x * x + 0.2843 * x * x * x +
@@ -54,8 +65,10 @@ TEST(Naca, SymmetricOrdinatesFollowTheThicknessFormula) {
     for (double x : {0.0, 0.0125, 0.05, 0.1, 0.3, 0.5, 0.8, 0.95, 1.0}) {
         EXPECT_NEAR(naca_half_thickness(x, 0.12, TrailingEdge::open),
                     thickness_formula(x, 0.12, -0.1015), 1e-15);
-        EXPECT_NEAR(naca_half_thickness(x, 0.12, TrailingEdge::closed),
-                    thickness_formula(x, 0.12, -0.1036), 1e-15);
+        EXPECT_NEAR(
+            naca_half_thickness(x, 0.12, TrailingEdge::closed),
+            thickness_formula(x, 0.12, abbott().value("closed_trailing_edge_last_coefficient")),
+            1e-15);
     }
 }
 
@@ -63,7 +76,8 @@ TEST(Naca, TrailingEdgeGapAndThicknessMatchThePublishedFigures) {
     // total trailing-edge thickness 0.252% c for t = 0.12 (Abbott & von Doenhoff 1959 [T]),
     // given to three digits: tolerance 5e-6
     const RawOutline open = naca_outline("0012", TrailingEdge::open);
-    EXPECT_NEAR(norm(open.points.back() - open.points.front()), 0.00252, 5e-6);
+    EXPECT_NEAR(norm(open.points.back() - open.points.front()),
+                abbott().value("trailing_edge_thickness_t12"), 5e-6);
     // the closed variant (last coefficient -0.1036) ends both surfaces at one point
     const RawOutline closed = naca_outline("0012", TrailingEdge::closed);
     EXPECT_EQ(closed.points.front().x, closed.points.back().x);
@@ -81,11 +95,11 @@ TEST(Naca, TrailingEdgeGapAndThicknessMatchThePublishedFigures) {
 }
 
 TEST(Naca, SymmetricAreaMatchesTheIntegralOfTheThicknessFormula) {
-    // sections.md [D]: area = integral of 2 y_t = 0.68508 t. Re-derived here in closed form:
+    // Abbott & von Doenhoff's formula [D]: area = integral of 2 y_t = 0.68508 t. Re-derived here:
     // 10 t (0.2969 * 2/3 - 0.1260/2 - 0.3516/3 + 0.2843/4 - 0.1015/5).
     const double coefficient =
         10.0 * (0.2969 * 2.0 / 3.0 - 0.1260 / 2.0 - 0.3516 / 3.0 + 0.2843 / 4.0 - 0.1015 / 5.0);
-    EXPECT_NEAR(coefficient, 0.68508, 5e-6);  // the [D] value is given to five digits
+    EXPECT_NEAR(coefficient, abbott().value("area_per_thickness"), 5e-6);  // five digits given
     for (const char* digits : {"0006", "0012", "0021"}) {
         const double t = naca_thickness(digits);
         // The polygon through the points cuts the convex outline: its area converges at second
@@ -108,7 +122,8 @@ TEST(Naca, LeadingEdgeRadiusOfTheGeneratedSection) {
         const ParametricSpline spline(s.points);
         const double radius = 1.0 / std::abs(spline.curvature(spline.knots()[s.leading_edge]));
         const double t = naca_thickness(digits);
-        EXPECT_NEAR(radius / (1.1019 * t * t), 1.0, 0.025) << digits;
+        EXPECT_NEAR(radius / (abbott().value("leading_edge_radius_per_t2") * t * t), 1.0, 0.025)
+            << digits;
     }
 }
 
@@ -142,7 +157,7 @@ TEST(Naca, FourDigitCamberLine) {
 
 /// Thin-airfoil zero-lift angle and quarter-chord moment by midpoint quadrature in theta (x = (1 -
 /// cos theta)/2): alpha_L0 = -(1/pi) int dz/dx (cos theta - 1), cm = (pi/4)(A2 - A1), A_n = (2/pi)
-/// int dz/dx cos(n theta) (sections.md; Abbott & von Doenhoff chapter 4).
+/// int dz/dx cos(n theta) (Abbott & von Doenhoff chapter 4).
 void thin_airfoil(const std::string& digits, double& alpha_deg, double& cm) {
     const int n = 20000;
     double a0 = 0.0, a1 = 0.0, a2 = 0.0;
@@ -171,15 +186,17 @@ double ideal_lift(const std::string& digits) {
 }
 
 TEST(Naca, CamberSlopesGiveThePublishedThinAirfoilValues) {
-    // sections.md [D]: 2412 alpha_L0 -2.077 deg, cm -0.0531; 4412 -4.154 deg, -0.1062. The
-    // tolerances are half a unit of the last digit given.
-    double alpha = 0.0, cm = 0.0;
-    thin_airfoil("2412", alpha, cm);
-    EXPECT_NEAR(alpha, -2.077, 5e-4);
-    EXPECT_NEAR(cm, -0.0531, 5e-5);
-    thin_airfoil("4412", alpha, cm);
-    EXPECT_NEAR(alpha, -4.154, 5e-4);
-    EXPECT_NEAR(cm, -0.1062, 5e-5);
+    // Thin-airfoil theory [D] (Abbott & von Doenhoff 1959, chapter 4): 2412 alpha_L0 -2.077 deg,
+    // cm -0.0531; 4412 -4.154 deg, -0.1062. The tolerances are half a unit of the last digit.
+    const test::ReferenceTable ref = test::ReferenceTable::read("thin_airfoil_camber_lines.csv", 2);
+    for (std::size_t row = 0; row < ref.rows(); ++row) {
+        const std::string digits = ref.text(row, "camber_line");
+        double alpha = 0.0, cm = 0.0;
+        thin_airfoil(digits, alpha, cm);
+        EXPECT_NEAR(alpha, ref.number(row, "alpha_zero_lift_deg"), 5e-4) << digits;
+        EXPECT_NEAR(cm, ref.number(row, "cm_quarter_chord"), 5e-5) << digits;
+    }
+    std::cout << "compared " << 2 * ref.rows() << " values of thin-airfoil theory\n";
 }
 
 TEST(Naca, FiveDigitMeanLine230) {

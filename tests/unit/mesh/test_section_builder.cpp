@@ -9,6 +9,7 @@
 #include "mesh/naca.hpp"
 #include "mesh/section_builder.hpp"
 #include "tests/support/naca_tables.hpp"
+#include "tests/reference_table.hpp"
 
 namespace veer {
 namespace {
@@ -192,8 +193,10 @@ TEST(SectionBuilder, BluntTrailingEdgeIsClosedWithAWedge) {
     // The chord stays the formula's: the base sits at x = 1 and the tip behind it.
     const Section s = make_section(naca_outline("0012", TrailingEdge::open), "blunt");
     ASSERT_EQ(s.points.size(), 323u);  // the tip is added first and last
+    const test::ReferenceTable abbott =
+        test::ReferenceTable::read("abbott1959_naca_sections.csv", 4);
     EXPECT_EQ(s.closure.form, TrailingEdgeClosure::Form::wedge);
-    EXPECT_NEAR(s.closure.gap, 0.00252, 5e-6);
+    EXPECT_NEAR(s.closure.gap, abbott.value("trailing_edge_thickness_t12"), 5e-6);
     EXPECT_EQ(s.points.front().x, s.points.back().x);
     EXPECT_EQ(s.points.front().y, 0.0);
     EXPECT_EQ(s.points.back().y, 0.0);

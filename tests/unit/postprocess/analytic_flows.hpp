@@ -10,6 +10,7 @@
 #include "mesh/grid_metrics.hpp"
 #include "mesh/vec2.hpp"
 #include "solver/flow_fields.hpp"
+#include "tests/reference_table.hpp"
 
 namespace veer::test {
 
@@ -102,6 +103,21 @@ struct Joukowski {
         return {w.real(), -w.imag()};
     }
 };
+
+/// A worked Joukowski case of tests/reference/joukowski_sections.csv [D] (b = 1, mu_x = 0.1).
+struct JoukowskiReference {
+    double chord = 0.0, cl = 0.0;
+};
+
+/// The row of the worked values for (mu_y, alpha_deg); throws if the file or the row is missing.
+inline JoukowskiReference joukowski_reference(double mu_y, double alpha_deg) {
+    const ReferenceTable t = ReferenceTable::read("joukowski_sections.csv", 3);
+    for (std::size_t row = 0; row < t.rows(); ++row)
+        if (t.number(row, "mu_y") == mu_y && t.number(row, "alpha_deg") == alpha_deg)
+            return {t.number(row, "chord"), t.number(row, "cl")};
+    throw std::runtime_error(t.path() + " has no row for mu_y " + std::to_string(mu_y) +
+                             ", alpha " + std::to_string(alpha_deg));
+}
 
 /// Cell-centred fields of a potential flow: velocity at the centroids, Bernoulli pressure
 /// p - p_inf = (1 - |u|^2) / 2, no eddy viscosity.
