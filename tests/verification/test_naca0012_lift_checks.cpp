@@ -60,6 +60,7 @@ TEST(Naca0012LiftChecks, KuttaSuctionPeakAndDownwashAtFourDegrees) {
     // theorem: the lift is the downward momentum given to the air plus the pressure on the
     // control surface), so the downward momentum flux, the downwash angle and the mean velocity
     // normal to the free stream have the signs of a downward turn at every station.
+    ASSERT_EQ(a.wake.size(), 3u) << "the default wake stations 0.25, 1 and 3 chords";
     for (const WakeProfile& w : a.wake) {
         const double v_normal = test::mean_normal_velocity(w, run.alpha_deg);
         std::cout << "  wake " << w.station << ": downward momentum flux "
@@ -75,7 +76,9 @@ TEST(Naca0012LiftChecks, NoDownwashBehindTheSymmetricSectionAtZeroIncidence) {
     const test::PipelineRun run = test::run_pipeline(test::naca0012_case_text(test::grid_256(), 0));
     ASSERT_EQ(run.result.status, RunStatus::converged) << run.result.steps << " steps";
     const RunAnalysis& a = run.analysis;
+    ASSERT_EQ(a.wake.size(), 3u) << "the default wake stations 0.25, 1 and 3 chords";
     for (const WakeProfile& w : a.wake) {
+        ASSERT_GT(w.samples.size(), 10u) << "station " << w.station;
         const double v_normal = test::mean_normal_velocity(w, 0.0);
         double worst_asymmetry = 0.0, largest_v = 0.0;
         const std::size_t n = w.samples.size();

@@ -72,7 +72,9 @@ TEST(SurfaceSampling, NodesLieOnTheSectionSpline) {
         const Section s = naca(digits, TrailingEdge::open);
         const ParametricSpline spline(s.points);
         double worst = 0.0;
-        for (const Vec2& p : sample_surface(s, 256)) {
+        const std::vector<Vec2> nodes = sample_surface(s, 256);
+        ASSERT_EQ(nodes.size(), 257u) << digits;  // around + 1 nodes
+        for (const Vec2& p : nodes) {
             worst = std::max(worst, norm(spline.position(spline.nearest_parameter(p)) - p));
         }
         EXPECT_LT(worst, 1e-9) << digits;

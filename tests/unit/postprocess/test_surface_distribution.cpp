@@ -85,6 +85,9 @@ TEST(SurfaceDistribution, LinearWallProfileGivesItsYPlus) {
     const SurfaceDistribution d = surface_distribution(c.grid, faces, {re, 0.0});
     // u_t = slope d: tau_w = slope / Re, Cf = 2 tau_w with the sign of the +i shear (negative on
     // the lower surface, where +i runs forward), y+ = d1 sqrt(tau_w) Re. Round-off tolerances.
+    ASSERT_FALSE(d.upper.empty());
+    ASSERT_FALSE(d.lower.empty());
+    EXPECT_EQ(d.upper.size() + d.lower.size(), faces.size());
     for (const SurfacePoint& p : d.upper) {
         EXPECT_NEAR(p.cf, 2.0 * slope / re, 1e-12);
         const double d1 = faces[static_cast<std::size_t>(p.i - wall.begin)].first_cell_distance;

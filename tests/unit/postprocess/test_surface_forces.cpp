@@ -81,6 +81,7 @@ TEST(SurfaceForces, QuadraticWallProfileGivesItsExactShear) {
     }
     const auto faces = evaluate_wall_faces(grid, m, f, conditions, WallPressure::extrapolated);
     // u_t = A d + B d^2 is what the reconstruction fits: exact up to round-off.
+    ASSERT_EQ(faces.size(), static_cast<std::size_t>(wall.count()));
     for (const WallFaceState& face : faces) EXPECT_NEAR(face.shear, slope / 500.0, 1e-12);
     // A uniform shear along +i on a closed clockwise outline sums to a zero net force.
     const SurfaceForces forces = integrate_surface_forces(faces, conditions);
