@@ -1,6 +1,7 @@
 /// The grid convergence index helper of the SA validation, on the flat-plate SA Cf of the NASA
-/// Turbulence Modeling Resource in tests/reference/tmr_flat_plate_sa_grid_family.csv [D]: grids of 13056, 52224
-/// and 208896 cells (refinement ratio exactly 2), Cf = 0.0027112, 0.0027067, 0.0027056.
+/// Turbulence Modeling Resource in tests/reference/tmr_flat_plate_sa_grid_family.csv [D]: grids of
+/// 13056, 52224 and 208896 cells (refinement ratio exactly 2), Cf = 0.0027112, 0.0027067,
+/// 0.0027056.
 ///
 /// From these seven-digit values the procedure gives, by hand: p = ln(45 / 11) / ln 2 = 2.0324
 /// (q = 0 for a constant ratio), e_a = 1.1e-6 / 0.0027056 = 0.0407%, phi_ext = phi1 - 1.1e-6 /
@@ -12,14 +13,26 @@
 #include <gtest/gtest.h>
 
 #include <cmath>
+#include <iostream>
+
+#include "tests/reference_table.hpp"
 
 namespace veer {
 namespace {
 
 TEST(SaGridConvergenceIndex, FlatPlateValuesByHand) {
-    const test::GciResult g = test::grid_convergence_index(
-        {std::sqrt(1.0 / 208896), std::sqrt(1.0 / 52224), std::sqrt(1.0 / 13056)},
-        {0.0027056, 0.0027067, 0.0027112});
+    // Finest first, as the file lists them (3 rows).
+    const test::ReferenceTable family =
+        test::ReferenceTable::read("tmr_flat_plate_sa_grid_family.csv", 3);
+    std::array<double, 3> h{}, cf{};
+    for (std::size_t k = 0; k < 3; ++k) {
+        h[k] = std::sqrt(1.0 / family.number(k, "cells"));
+        cf[k] = family.number(k, "cf");
+    }
+    std::cout << "compared " << family.rows() << " grids of the TMR flat-plate family\n";
+    // The closed forms below are written for these values.
+    ASSERT_EQ(cf, (std::array<double, 3>{0.0027056, 0.0027067, 0.0027112}));
+    const test::GciResult g = test::grid_convergence_index(h, cf);
     const double p = std::log(45.0 / 11.0) / std::log(2.0);
     const double rp1 = std::pow(2.0, p) - 1.0;
     // Hand values from the closed forms above; 1e-9 relative is round-off of the fixed point.

@@ -26,10 +26,14 @@
 #include <algorithm>
 #include <chrono>
 #include <cmath>
+#include <fstream>
 #include <iostream>
-#include <map>
+#include <nlohmann/json.hpp>
+#include <sstream>
 
 #include "app/convergence.hpp"
+#include "computed_once.hpp"
+#include "io/json_writer.hpp"
 #include "mesh/cgrid.hpp"
 #include "mesh/grid_metrics.hpp"
 #include "mesh/naca.hpp"
@@ -40,6 +44,7 @@
 #include "solver/flow_solver.hpp"
 #include "solver/spalart_allmaras_model.hpp"
 #include "test_sa_gci.hpp"
+#include "tests/reference_table.hpp"
 
 namespace veer {
 namespace {
@@ -69,6 +74,31 @@ struct AirfoilResult {
     SurfaceForces forces;
 };
 
+nlohmann::json to_json(const AirfoilResult& r) {
+    const SurfaceForces& f = r.forces;
+    return {{"converged", r.converged},
+            {"steps", r.steps},
+            {"seconds", r.seconds},
+            {"cl", f.cl.total},
+            {"cd", f.cd.total},
+            {"cd_pressure", f.cd.pressure},
+            {"cd_friction", f.cd.friction},
+            {"cm", f.cm.total}};
+}
+
+AirfoilResult from_json(const nlohmann::json& j) {
+    AirfoilResult r;
+    r.converged = j.at("converged").get<bool>();
+    r.steps = j.at("steps").get<long>();
+    r.seconds = j.at("seconds").get<double>();
+    r.forces.cl.total = j.at("cl").get<double>();
+    r.forces.cd.total = j.at("cd").get<double>();
+    r.forces.cd.pressure = j.at("cd_pressure").get<double>();
+    r.forces.cd.friction = j.at("cd_friction").get<double>();
+    r.forces.cm.total = j.at("cm").get<double>();
+    return r;
+}
+
 /// Steady run to the criteria of `veer run`'s monitor (its own ConvergenceMonitor): every residual
 /// (u, v, continuity, nu_tilde) 1e-6 of its reference (the largest of the first 20 steps), and Cl,
 /// Cd changed by less than 1e-5 over the last 100 steps.
@@ -93,55 +123,70 @@ AirfoilResult run_airfoil(const StructuredGrid& grid, double alpha, long max_ste
     return out;
 }
 
-struct TmrBand {
-    double alpha, cl_lo, cl_hi, cd_lo, cd_hi;
-};
+/// NASA TMR NACA 0012 validation case, SA, seven codes on 897 x 257 [P]: the codes' smallest,
+/// largest and mean Cl and Cd at 0, 10 and 15 degrees (tests/reference/tmr_naca0012_sa.csv).
+const test::ReferenceTable& tmr_bands() {
+    static const test::ReferenceTable t = test::ReferenceTable::read("tmr_naca0012_sa.csv", 3);
+    return t;
+}
 
-// NASA TMR NACA 0012 validation case, SA, seven codes on 897 x 257 [P] (tmr_naca0012_sa.md).
-constexpr TmrBand tmr_bands[] = {
-    {0.0, 0.0, 0.0, 0.00812, 0.00830},
-    {10.0, 1.0891, 1.1000, 0.01225, 0.01245},
-    {15.0, 1.5446, 1.5642, 0.02073, 0.02159},
-};
+/// How far `ours` may lie from the codes' mean: their own spread (largest - smallest). A result
+/// that differs from the mean by no more than the seven codes differ among themselves is as close
+/// to the published answer as those codes are to each other; our grid (512 x 160 against their
+/// 897 x 257) and the M = 0.15 difference must fit inside it, and the grid study below must show
+/// that the grid's own uncertainty does.
+void expect_within_spread(double ours, std::size_t row, const std::string& quantity) {
+    const test::ReferenceTable& t = tmr_bands();
+    const double lo = t.number(row, quantity + "_min"), hi = t.number(row, quantity + "_max");
+    const double mean = t.number(row, quantity + "_mean");
+    EXPECT_NEAR(ours, mean, hi - lo) << quantity << " at alpha " << t.number(row, "alpha_deg")
+                                     << "; TMR codes " << lo << "-" << hi;
+}
 
 /// Converged runs here take 1200-1600 steps (alpha 10, 384 x 120 and 512 x 160); the cap
 /// bounds the CPU time of the runs that do not converge (see the notes in solver/README).
 constexpr long step_cap = 5000;
 
-/// Results by (grid level, alpha), run once per process (the benchmark grid at 10 degrees
-/// serves both tests).
-const AirfoilResult& result_for(int level, double alpha) {
-    static std::map<std::pair<int, double>, AirfoilResult> done;
-    const auto key = std::make_pair(level, alpha);
-    auto it = done.find(key);
-    if (it == done.end())
-        it = done.emplace(key, run_airfoil(family_grid(level), alpha, step_cap)).first;
-    return it->second;
+/// The result of (grid level, alpha), run once per build (computed_once.hpp): the benchmark
+/// grid at 10 degrees serves both tests, which ctest runs in separate processes.
+AirfoilResult result_for(int level, double alpha) {
+    const StructuredGrid grid = family_grid(level);
+    std::ostringstream name, inputs;
+    name << "sa_naca0012_level" << level << "_alpha" << alpha;
+    inputs << "grid " << grid.ni() << " x " << grid.nj() << ", first node spacing "
+           << norm(grid.node(0, 1) - grid.node(0, 0)) << ", alpha " << alpha << ", cap "
+           << step_cap;
+    const std::filesystem::path dir =
+        test::computed_once(name.str(), inputs.str(), [&](const std::filesystem::path& d) {
+            write_json_file(d / "result.json", to_json(run_airfoil(grid, alpha, step_cap)));
+        });
+    return from_json(read_json_file(dir / "result.json"));
 }
 
 TEST(SaNaca0012, LiftAndDragWithinTmrBands) {
-    for (const TmrBand& b : tmr_bands) {
-        const AirfoilResult& r = result_for(0, b.alpha);
+    const test::ReferenceTable& tmr = tmr_bands();
+    for (std::size_t row = 0; row < tmr.rows(); ++row) {
+        const double alpha = tmr.number(row, "alpha_deg");
+        const AirfoilResult r = result_for(0, alpha);
         const double cl = prandtl_glauert * r.forces.cl.total, cd = r.forces.cd.total;
-        std::cout << "NACA 0012 Re 6e6 alpha " << b.alpha << ": " << r.steps << " steps, "
+        std::cout << "NACA 0012 Re 6e6 alpha " << alpha << ": " << r.steps << " steps, "
                   << r.seconds << " s, Cl " << r.forces.cl.total << " (x 1.0114 = " << cl
-                  << "; TMR " << b.cl_lo << "-" << b.cl_hi << "), Cd " << cd << " (pressure "
-                  << r.forces.cd.pressure << ", friction " << r.forces.cd.friction << "; TMR "
-                  << b.cd_lo << "-" << b.cd_hi << "), Cm " << r.forces.cm.total << "\n";
-        EXPECT_TRUE(r.converged) << "alpha " << b.alpha;
-        // The bands: Cl within 2% of the TMR band, Cd within 5%. At alpha = 0 the lift
-        // of a symmetric section is zero: |Cl| < 0.002, 2% of the lift of one degree (slope
-        // 0.1075 per degree at Re 6e6, McCroskey 1987, NASA TM-100019, as tmr_naca0012_sa.md
-        // derives it).
-        if (b.alpha == 0.0) {
+                  << "; TMR " << tmr.number(row, "cl_min") << "-" << tmr.number(row, "cl_max")
+                  << "), Cd " << cd << " (pressure " << r.forces.cd.pressure << ", friction "
+                  << r.forces.cd.friction << "; TMR " << tmr.number(row, "cd_min") << "-"
+                  << tmr.number(row, "cd_max") << "), Cm " << r.forces.cm.total << "\n";
+        EXPECT_TRUE(r.converged) << "alpha " << alpha;
+        // At alpha = 0 the resource gives no Cl band: the lift of a symmetric section is zero,
+        // |Cl| < 0.002, 2% of the lift of one degree (slope 0.1075 per degree at Re 6e6,
+        // McCroskey 1987, NASA TM-100019, tests/reference/mccroskey1987_lift_slope.csv).
+        if (alpha == 0.0) {
             EXPECT_LT(std::abs(cl), 0.002);
         } else {
-            EXPECT_GE(cl, 0.98 * b.cl_lo) << "alpha " << b.alpha;
-            EXPECT_LE(cl, 1.02 * b.cl_hi) << "alpha " << b.alpha;
+            expect_within_spread(cl, row, "cl");
         }
-        EXPECT_GE(cd, 0.95 * b.cd_lo) << "alpha " << b.alpha;
-        EXPECT_LE(cd, 1.05 * b.cd_hi) << "alpha " << b.alpha;
+        expect_within_spread(cd, row, "cd");
     }
+    std::cout << "compared " << 2 * tmr.rows() << " values with the TMR codes' bands\n";
 }
 
 TEST(SaNaca0012, GridConvergenceAtTenDegrees) {
@@ -152,7 +197,7 @@ TEST(SaNaca0012, GridConvergenceAtTenDegrees) {
     for (int level = 0; level < 3; ++level) {
         const StructuredGrid grid = family_grid(level);
         const double cells = static_cast<double>(grid.ni()) * grid.nj();
-        const AirfoilResult& r = result_for(level, 10.0);
+        const AirfoilResult r = result_for(level, 10.0);
         EXPECT_TRUE(r.converged) << "level " << level;
         const auto k = static_cast<std::size_t>(level);
         h[k] = 1.0 / std::sqrt(cells);
@@ -170,9 +215,14 @@ TEST(SaNaca0012, GridConvergenceAtTenDegrees) {
               << "| Cd | " << gd.order << " | " << gd.extrapolated << " | " << gd.relative_error
               << " | " << 100.0 * gd.gci_fine << "% | " << gd.oscillatory << " |\n";
     // The band comparison above only means something if the numerical uncertainty of the
-    // benchmark grid is inside its tolerance: 2% on Cl, 5% on Cd (the bands).
-    EXPECT_LT(gl.gci_fine, 0.02);
-    EXPECT_LT(gd.gci_fine, 0.05);
+    // benchmark grid is inside its tolerance, the TMR codes' spread at 10 degrees relative to
+    // their mean: 1.0% on Cl (0.0109 / 1.0935), 1.6% on Cd (0.0002 / 0.01236).
+    const test::ReferenceTable& tmr = tmr_bands();
+    const std::size_t ten = tmr.row_where("alpha_deg", "10");
+    EXPECT_LT(gl.gci_fine,
+              (tmr.number(ten, "cl_max") - tmr.number(ten, "cl_min")) / tmr.number(ten, "cl_mean"));
+    EXPECT_LT(gd.gci_fine,
+              (tmr.number(ten, "cd_max") - tmr.number(ten, "cd_min")) / tmr.number(ten, "cd_mean"));
 }
 
 }  // namespace

@@ -33,6 +33,7 @@
 #include "app/sweep_record.hpp"
 #include "io/json_writer.hpp"
 #include "postprocess/time_average.hpp"
+#include "tests/reference_table.hpp"
 
 namespace veer {
 namespace {
@@ -49,21 +50,25 @@ TEST(SweepLowRe, UnsteadinessSetsInNearEightDegrees) {
     fs::create_directories(work);
     std::ofstream(work / "case.toml") << "[geometry]\nnaca = \"0012\"\n[flow]\nreynolds = 1000\n"
                                          "model = \"laminar\"\n[run]\nmode = \"steady\"\n";
+    // Kurtulus (2015), abstract: unsteady from about 8 degrees at Re 1000 [P].
+    const test::ReferenceTable kurtulus =
+        test::ReferenceTable::read("kurtulus2015_naca0012_re1000.csv", 2);
+    ASSERT_EQ(kurtulus.value("reynolds"), 1000.0);
+    const double onset = kurtulus.value("unsteady_onset_alpha_deg");
     SweepOptions o;
     o.input.case_file = work / "case.toml";
-    o.alpha = "6:10:2";
+    o.alpha = std::to_string(onset - 2.0) + ":" + std::to_string(onset + 2.0) + ":2";
     o.out_dir = work / "sweep";
     o.quiet = true;
     ASSERT_EQ(run_sweep_command(o), 0);
 
-    const PointRecord at6 = record_at(o.out_dir, 6.0);
-    const PointRecord at8 = record_at(o.out_dir, 8.0);
-    const PointRecord at10 = record_at(o.out_dir, 10.0);
+    const PointRecord at6 = record_at(o.out_dir, onset - 2.0);
+    const PointRecord at8 = record_at(o.out_dir, onset);
+    const PointRecord at10 = record_at(o.out_dir, onset + 2.0);
     for (const PointRecord* r : {&at6, &at8, &at10})
         std::cout << "alpha " << r->alpha << ": " << r->regime << ", Cl " << r->cl << ", Cd "
                   << r->cd << (r->strouhal ? ", St " + std::to_string(*r->strouhal) : "") << " -- "
                   << r->note << "\n";
-    // Kurtulus (2015), abstract: unsteady from about 8 degrees.
     EXPECT_EQ(at6.regime, "steady") << at6.note;
     EXPECT_EQ(at10.regime, "unsteady") << at10.note;
     EXPECT_NE(at8.regime, "failed") << at8.note;
