@@ -1,5 +1,5 @@
 // First-cell height from a wanted y+ (turbulent flat-plate correlation). The y+ a run reaches
-// with it is checked in tests/unit/app/test_shipped_cases.cpp.
+// with it is checked in tests/smoke/test_shipped_cases.cpp.
 #include <gtest/gtest.h>
 
 #include <cmath>

@@ -13,7 +13,7 @@
 
 #include "app/commands.hpp"
 #include "app/report_csv.hpp"
-#include "app_test_support.hpp"
+#include "../unit/app/app_test_support.hpp"
 #include "io/json_writer.hpp"
 
 namespace veer {
