@@ -29,8 +29,11 @@ RouteGap run_grid(const test::CaseGrid& g) {
     EXPECT_EQ(run.result.status, RunStatus::converged)
         << g.around << "x" << g.normal << ": " << run.result.steps << " steps";
     const RunAnalysis& a = run.analysis;
-    EXPECT_FALSE(a.momentum.empty());
     RouteGap out;
+    if (a.momentum.size() != 4) {  // default contours 0.5, 1, 2, 4 chords
+        ADD_FAILURE() << g.around << "x" << g.normal << ": " << a.momentum.size() << " contours";
+        return out;
+    }
     out.cl_surface = a.forces.cl.total;
     out.cl_momentum = a.momentum.back().cl.total;  // default contours 0.5, 1, 2, 4 chords
     out.relative = std::abs(out.cl_momentum - out.cl_surface) / std::abs(out.cl_surface);
