@@ -10,7 +10,7 @@
 /// The streamwise velocity on each seam face is the mean of the two cells it joins; L runs from
 /// the rear point to the first face-to-face change from u < 0 to u >= 0, interpolated linearly
 /// in distance. Compared with the recirculation length L/D of the steady cylinder wake
-/// (Coutanceau & Bouard 1977, Dennis & Chang 1970; ../shared/reference/cylinder.md).
+/// (Coutanceau & Bouard 1977, Dennis & Chang 1970; tests/reference/cylinder_re40_steady.csv).
 #include <optional>
 
 #include "mesh/grid_metrics.hpp"
