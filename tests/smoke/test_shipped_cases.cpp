@@ -11,9 +11,10 @@
 #include <string>
 #include <vector>
 
+#include "../unit/app/app_test_support.hpp"
 #include "app/commands.hpp"
 #include "app/report_csv.hpp"
-#include "../unit/app/app_test_support.hpp"
+#include "io/case_file.hpp"
 #include "io/json_writer.hpp"
 
 namespace veer {
@@ -82,7 +83,9 @@ TEST(ShippedCases, TurbineSectionReachesTheRequestedYPlus) {
     const CsvTable surface = CsvTable::read(run.out_dir / "surface.csv");
     const std::vector<double> x = surface.numbers("x_c"), y_plus = surface.numbers("y_plus");
     ASSERT_EQ(y_plus.size(), 128u) << "one row per wall face";
-    const double requested = 1.0;  // the case file's mesh.y_plus
+    const CaseSpec spec = read_case_file(run.input.case_file, run.input.overrides);
+    ASSERT_TRUE(spec.y_plus.has_value()) << "the case no longer sets mesh.y_plus";
+    const double requested = *spec.y_plus;  // 1 in the shipped file
     double mid_sum = 0.0, largest = 0.0;
     int mid_count = 0;
     for (std::size_t k = 0; k < y_plus.size(); ++k) {
