@@ -6,6 +6,7 @@
 #include <unistd.h>
 
 #include <cmath>
+#include <cstdio>
 #include <filesystem>
 #include <fstream>
 #include <map>
@@ -19,6 +20,7 @@
 #include "app/run_report.hpp"
 #include "app/simulation.hpp"
 #include "io/case_file.hpp"
+#include "tests/reference_table.hpp"
 
 namespace veer::test {
 
@@ -27,29 +29,16 @@ inline std::filesystem::path repository_file(const std::string& relative) {
     return std::filesystem::path(VEER_SOURCE_DIR) / relative;
 }
 
-/// The [low, high] bands of a `quantity,low,high,mark` file in tests/reference/ (comment lines
-/// start with #). Fails the test when the file or a quantity is missing.
-inline std::map<std::string, std::pair<double, double>> read_bands(const std::string& file) {
-    const std::filesystem::path path = repository_file("tests/reference/" + file);
-    std::ifstream in(path);
-    EXPECT_TRUE(in.good()) << "cannot open " << path;
+/// The [low, high] bands of a `quantity,low,high,mark` file in tests/reference/, read with the
+/// shared reader (tests/reference_table.hpp): a missing file, a malformed row or a row count other
+/// than `rows` throws, and the test fails. Prints how many bands it read; expect_in_band compares.
+inline std::map<std::string, std::pair<double, double>> read_bands(const std::string& file,
+                                                                   std::size_t rows) {
+    const ReferenceTable t = ReferenceTable::read(file, rows);
     std::map<std::string, std::pair<double, double>> bands;
-    std::string line;
-    bool header = true;
-    while (std::getline(in, line)) {
-        if (line.empty() || line[0] == '#') continue;
-        if (header) {  // quantity,low,high,mark
-            header = false;
-            continue;
-        }
-        std::stringstream row(line);
-        std::string name, low, high;
-        std::getline(row, name, ',');
-        std::getline(row, low, ',');
-        std::getline(row, high, ',');
-        bands[name] = {std::stod(low), std::stod(high)};
-    }
-    EXPECT_FALSE(bands.empty()) << path << " holds no bands";
+    for (std::size_t r = 0; r < t.rows(); ++r)
+        bands[t.text(r, "quantity")] = {t.number(r, "low"), t.number(r, "high")};
+    std::printf("read %zu bands of %s\n", bands.size(), file.c_str());
     return bands;
 }
 
