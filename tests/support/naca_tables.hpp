@@ -8,7 +8,7 @@
 ///   camber     y_c = m/p^2 (2px - x^2) for x <= p, m/(1-p)^2 [(1 - 2p) + 2px - x^2] beyond,
 ///   surface    x = x_c -+ y_t sin(theta), y = y_c +- y_t cos(theta), theta = atan(dy_c/dx)
 /// (Abbott & von Doenhoff 1959, Theory of Wing Sections, section 6.4; Jacobs, Ward & Pinkerton
-/// 1933, NACA Report 460; as ../shared/reference/sections.md gives them, mark [T]).
+/// 1933, NACA Report 460; coefficients [T]; figures compared with: tests/reference/).
 #include <cmath>
 #include <cstdio>
 #include <filesystem>
