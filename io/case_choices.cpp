@@ -74,9 +74,7 @@ TimeMode mode_of(std::string_view word) { return value_of(mode_table(), word); }
 TrailingEdge trailing_edge_of(std::string_view word) {
     return value_of(trailing_edge_table(), word);
 }
-ChordLineChoice chord_line_of(std::string_view word) {
-    return value_of(chord_line_table(), word);
-}
+ChordLineChoice chord_line_of(std::string_view word) { return value_of(chord_line_table(), word); }
 PressureSolverKind pressure_solver_of(std::string_view word) {
     return value_of(pressure_solver_table(), word);
 }

@@ -30,8 +30,9 @@ inline constexpr const char* k_layouts_read =
 /// `layout` describing what was found. A first block of one point with two whole numbers that
 /// match the sizes of what follows is a count line. Blocks that continue one another (the
 /// next starts within three of the neighbouring steps of where the last ended) are one run of
-/// points, and so are blocks that together close on themselves; two runs that share an end are two surfaces (a repeated shared leading-edge point is
-/// kept once). Throws InputError naming the file and lines for anything else.
+/// points, and so are blocks that together close on themselves; two runs that share an end are two
+/// surfaces (a repeated shared leading-edge point is kept once). Throws InputError naming the file
+/// and lines for anything else.
 RawOutline assemble_outline(const FileBlocks& b);
 
 }  // namespace veer

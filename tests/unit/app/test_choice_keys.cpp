@@ -2,12 +2,12 @@
 // every word it takes and with near misses of those words (the other separator, a capital, a
 // word of another key), and the rules run applies beyond the reader's (the steady CFL limit,
 // the places of the analysis). Each value goes in through --set, as a user would try it.
+#include <fmt/format.h>
 #include <gtest/gtest.h>
 
 #include <algorithm>
 #include <cctype>
 #include <cmath>
-#include <fmt/format.h>
 #include <set>
 
 #include "app/commands.hpp"

@@ -8,8 +8,8 @@
 #include "mesh/errors.hpp"
 #include "mesh/naca.hpp"
 #include "mesh/section_builder.hpp"
-#include "tests/support/naca_tables.hpp"
 #include "tests/reference_table.hpp"
+#include "tests/support/naca_tables.hpp"
 
 namespace veer {
 namespace {
