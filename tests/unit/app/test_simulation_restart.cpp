@@ -108,6 +108,15 @@ void restart_reproduces(const std::string& mode) {
               test::read_text(scratch / "pieces" / "history.csv"));
 }
 
+/// Runs `part` to its step cap into `dir`, as a run interrupted there (its checkpoint and
+/// history.csv stay for the resume that follows).
+void run_first_part(const CaseSpec& part, const std::filesystem::path& dir) {
+    SimulationOptions quiet;
+    quiet.progress = false;
+    Simulation first(part, build_mesh(part).grid, dir, quiet);
+    ASSERT_EQ(first.run().steps, part.run.steps);
+}
+
 TEST(SimulationRestart, SteadyRunContinuesBitForBit) { restart_reproduces("steady"); }
 
 TEST(SimulationRestart, UnsteadyRunContinuesBitForBit) { restart_reproduces("unsteady"); }
@@ -141,10 +150,7 @@ TEST(SimulationRestart, OlderLaminarCheckpointResumes) {
     SimulationOptions quiet;
     quiet.progress = false;
     const CaseSpec part = small_case("steady", 30);
-    {
-        Simulation first(part, build_mesh(part).grid, scratch.path(), quiet);
-        ASSERT_EQ(first.run().steps, 30);
-    }
+    run_first_part(part, scratch.path());
     make_legacy(scratch.path());
     const CaseSpec whole = small_case("steady", 33);
     const CheckpointData saved = read_checkpoint(scratch / "checkpoint.h5");
@@ -167,10 +173,7 @@ TEST(SimulationRestart, LaminarCheckpointOfTheFourSlotMonitorResumes) {
     SimulationOptions quiet;
     quiet.progress = false;
     const CaseSpec part = small_case("steady", 30);
-    {
-        Simulation first(part, build_mesh(part).grid, scratch.path(), quiet);
-        ASSERT_EQ(first.run().steps, 30);
-    }
+    run_first_part(part, scratch.path());
     rewrite_record(scratch.path(), [](double count, const std::vector<double>& refs,
                                       double relative, const std::vector<double>& pairs) {
         std::vector<double> old = {-2.0, count, refs[0], refs[1], refs[2], 0.0, relative};
@@ -202,10 +205,7 @@ TEST(SimulationRestart, HistoryWithoutTheModelColumnIsPadded) {
     SimulationOptions quiet;
     quiet.progress = false;
     const CaseSpec part = small_case("steady", 15, "spalart-allmaras");
-    {
-        Simulation first(part, build_mesh(part).grid, scratch.path(), quiet);
-        ASSERT_EQ(first.run().steps, 15);
-    }
+    run_first_part(part, scratch.path());
     drop_last_history_column(scratch.path());
     const CheckpointData saved = read_checkpoint(scratch / "checkpoint.h5");
     Simulation resumed(small_case("steady", 18, "spalart-allmaras"), saved.grid, scratch.path(),
@@ -227,10 +227,7 @@ TEST(SimulationRestart, OlderSpalartAllmarasCheckpointIsRefusedClearly) {
     SimulationOptions quiet;
     quiet.progress = false;
     const CaseSpec part = small_case("steady", 30, "spalart-allmaras");
-    {
-        Simulation first(part, build_mesh(part).grid, scratch.path(), quiet);
-        ASSERT_EQ(first.run().steps, 30);
-    }
+    run_first_part(part, scratch.path());
     make_legacy(scratch.path());
     const CheckpointData saved = read_checkpoint(scratch / "checkpoint.h5");
     Simulation resumed(small_case("steady", 40, "spalart-allmaras"), saved.grid, scratch.path(),
