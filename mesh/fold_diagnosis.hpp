@@ -27,7 +27,7 @@ struct FoldCauseLimits {
 /// than the distance from the wall at which the layers folded, a corner of the outline, or the
 /// trailing-edge tip; without one of those the generic remedies (more normal cells, a smaller first
 /// cell or far field, more cells around) are given.
-std::string explain_fold(const GridFoldError& fold, const Section& section,
+std::string explain_fold(const GridFoldError& e, const Section& section,
                          const std::vector<Vec2>& surface, const CGridSpec& spec);
 
 }  // namespace veer
