@@ -36,6 +36,11 @@ int exit_code(RunStatus s) {
 }
 
 void say_how_it_ended(const RunResult& r, const Simulation& sim) {
+    if (r.scheme_fallback_step > 0)
+        fmt::print(
+            "note: the \"fast\" steady scheme stopped converging; from iteration {} the run went "
+            "on with \"classic\" (the same equations, smaller pseudo-time steps)\n",
+            r.scheme_fallback_step);
     switch (r.status) {
         case RunStatus::converged:
             fmt::print("converged after {} iterations in {:.1f} s\n", r.steps, r.wall_seconds);

@@ -57,6 +57,7 @@ SolverSettings solver_settings_for(const CaseSpec& spec) {
     s.mode = is_steady(spec) ? TimeMode::steady : TimeMode::time_accurate;
     s.pressure_solver = spec.run.pressure_solver;
     if (is_steady(spec) && spec.run.cfl > 0) s.pseudo_cfl = spec.run.cfl;
+    s.steady_scheme = spec.run.steady_scheme;
     s.model = spec.model;
     if (spec.geometry.circle) {
         // The point vortex stands for a steady lift; a shedding circle's lift has zero mean and
@@ -278,6 +279,7 @@ RunResult Simulation::run() {
         if (m_last_checkpoint_step != m_solver->step_count()) write_checkpoint_now();
     }
     res.steps = m_solver->step_count();
+    res.scheme_fallback_step = m_solver->scheme_fallback_step();
     res.time = m_solver->time();
     res.last_checkpoint_step = m_last_checkpoint_step;
     res.wall_seconds =

@@ -37,6 +37,8 @@ struct RunResult {
     StepReport last;            ///< the last step's figures
     SurfaceForces forces;       ///< the last step's surface forces
     long last_checkpoint_step = -1;
+    /// Steady "fast": the step after which the run went on with "classic" (0: it did not).
+    long scheme_fallback_step = 0;
 };
 
 struct SimulationOptions {

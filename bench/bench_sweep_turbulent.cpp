@@ -34,8 +34,7 @@ namespace {
 namespace fs = std::filesystem;
 
 /// The shipped case, so that the benchmark times what the case file gives users.
-const fs::path sweep_case =
-    fs::path(__FILE__).parent_path().parent_path() / "cases" / "wind-turbine-sweep-sa.toml";
+const fs::path sweep_case = fs::path(VEER_SOURCE_DIR) / "cases" / "wind-turbine-sweep-sa.toml";
 constexpr const char* angles = "0:18:2";
 
 std::string number_or_null(const nlohmann::json& j, const char* key, const char* format) {

@@ -40,6 +40,13 @@ const WordTable<PressureSolverKind>& pressure_solver_table() {
     return t;
 }
 
+/// The message lists the words in this order (tests/unit/io/test_case_file.cpp).
+const WordTable<SteadyScheme>& steady_scheme_table() {
+    static const WordTable<SteadyScheme> t = {{SteadyScheme::classic, "classic"},
+                                              {SteadyScheme::fast, "fast"}};
+    return t;
+}
+
 template <class E>
 std::string_view word_of(const WordTable<E>& table, E value) {
     for (const auto& [e, w] : table)
@@ -70,6 +77,10 @@ std::string_view trailing_edge_word(TrailingEdge edge) {
     return word_of(trailing_edge_table(), edge);
 }
 
+std::string_view steady_scheme_word(SteadyScheme scheme) {
+    return word_of(steady_scheme_table(), scheme);
+}
+
 TimeMode mode_of(std::string_view word) { return value_of(mode_table(), word); }
 TrailingEdge trailing_edge_of(std::string_view word) {
     return value_of(trailing_edge_table(), word);
@@ -78,13 +89,17 @@ ChordLineChoice chord_line_of(std::string_view word) { return value_of(chord_lin
 PressureSolverKind pressure_solver_of(std::string_view word) {
     return value_of(pressure_solver_table(), word);
 }
+SteadyScheme steady_scheme_of(std::string_view word) {
+    return value_of(steady_scheme_table(), word);
+}
 
 std::vector<ChoiceKey> case_choice_keys() {
     return {{"geometry", "trailing_edge", words_of(trailing_edge_table())},
             {"geometry", "chord_line", words_of(chord_line_table())},
             {"flow", "model", model_names()},
             {"run", "mode", words_of(mode_table())},
-            {"run", "pressure_solver", words_of(pressure_solver_table())}};
+            {"run", "pressure_solver", words_of(pressure_solver_table())},
+            {"run", "steady_scheme", words_of(steady_scheme_table())}};
 }
 
 std::vector<std::string> choice_words(std::string_view table, std::string_view key) {

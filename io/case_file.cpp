@@ -267,10 +267,12 @@ void read_run(const toml::table* t, const std::string& source, CaseSpec& c) {
                                .value_or(run.checkpoint_every);
     if (const auto solver = r.choice("run", "pressure_solver"))
         run.pressure_solver = pressure_solver_of(*solver);
+    if (const auto scheme = r.choice("run", "steady_scheme"))
+        run.steady_scheme = steady_scheme_of(*scheme);
     const auto spin = r.number("start_spin", 0.0, 2.0, "a surface speed from 0 to 2");
     r.reject_unknown(
         "mode, steps, end_time, cfl, residual_drop, force_tolerance, output_every, "
-        "checkpoint_every, pressure_solver, start_spin");
+        "checkpoint_every, pressure_solver, steady_scheme, start_spin");
     if (spin && *spin > 0.0 && !c.geometry.circle)
         r.fail(*t->get("start_spin"), "start_spin", fmt::format("{}", *spin),
                "0 unless [geometry] circle = true (only a circle can spin in place)");
@@ -279,13 +281,15 @@ void read_run(const toml::table* t, const std::string& source, CaseSpec& c) {
                "0 unless mode = \"unsteady\" (the spin starts a time-accurate run)");
     run.start_spin = spin.value_or(0.0);
     // Steady runs smooth the pressure with a coefficient that needs a pseudo CFL number above
-    // rhie_chow_scale / 2 (solver/README.md, "Projection"); the solver refuses smaller ones.
-    const double smallest = 0.5 * SolverSettings{}.rhie_chow_scale;
+    // rhie_chow_scale / (2 x the scheme's projection fraction) (solver/README.md, "Projection",
+    // "Steady schemes"); the solver refuses smaller ones, so `check` refuses them too.
+    const double fraction = steady_scheme_choices(run.steady_scheme, 1.0).projection_fraction;
+    const double smallest = 0.5 * SolverSettings{}.rhie_chow_scale / fraction;
     if (run.mode == TimeMode::steady && run.cfl > 0.0 && run.cfl <= smallest)
         r.fail(*t->get("cfl"), "cfl", fmt::format("{}", run.cfl),
-               fmt::format("0 (the model's default) or above {:g} in steady mode (the pressure "
-                           "smoothing of the steady iteration needs it)",
-                           smallest));
+               fmt::format("0 (the default) or above {:.3g} in steady mode with steady_scheme "
+                           "\"{}\" (the pressure smoothing of the steady iteration needs it)",
+                           smallest, steady_scheme_word(run.steady_scheme)));
 }
 
 void read_post(const toml::table* t, const std::string& source, CaseSpec& c) {

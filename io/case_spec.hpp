@@ -42,6 +42,7 @@ struct RunSpec {
     long output_every = 0;          ///< field frame interval in steps; 0: first and last only
     long checkpoint_every = 500;    ///< checkpoint interval in steps
     PressureSolverKind pressure_solver = PressureSolverKind::multigrid;
+    SteadyScheme steady_scheme = SteadyScheme::fast;  ///< steady: the path (same result)
     /// Circle, unsteady: surface speed (free-stream units) of a brief counter-clockwise spin of
     /// the body at the start, start_spin sin(pi t / 2) for 0 < t < 2, which breaks the symmetry
     /// of the start so that shedding begins within a few cycles (0: none).

@@ -87,6 +87,11 @@ public:
     /// Replaces the variables named in `arrays` (others keep their values); the solver checks
     /// names and sizes first.
     virtual void set_values(const std::vector<NamedArray>& arrays) = 0;
+    /// Whether the model's own line solves continue their j-lines across the wake cut
+    /// (wall_normal_lines.hpp): the steady scheme's choice, set after construction and on a
+    /// hand-over between schemes; the converged state does not depend on it. Models without
+    /// line solves ignore it.
+    virtual void fold_wake_cut_lines(bool /*fold*/) {}
     /// Further cell fields for the output frames (e.g. an intermittency); none by default.
     virtual std::vector<NamedArray> output_fields() const { return {}; }
 };

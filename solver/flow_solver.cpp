@@ -26,12 +26,21 @@ void check_settings(const FlowConditions& c, const SolverSettings& s) {
     };
     if (!(c.reynolds > 0.0)) fail("reynolds", c.reynolds, "> 0");
     if (!(s.pseudo_cfl >= 0.0)) fail("pseudo_cfl", s.pseudo_cfl, "> 0 (or 0: the default)");
-    if (s.mode == TimeMode::steady && !(effective_pseudo_cfl(s) > 0.5 * s.rhie_chow_scale))
+    // Rhie-Chow modes decay by 1 - D_f / gamma per step: |.| < 1 needs gamma > D_f / 2.
+    const double fraction = steady_choices(s).projection_fraction;
+    if (s.mode == TimeMode::steady &&
+        !(effective_pseudo_cfl(s) * fraction > 0.5 * s.rhie_chow_scale))
         fail("pseudo_cfl", effective_pseudo_cfl(s),
-             "> rhie_chow_scale / 2 (pressure smoothing stability)");
+             fraction == 1.0 ? "> rhie_chow_scale / 2 (pressure smoothing stability)"
+                             : "> rhie_chow_scale / (2 x the scheme's projection fraction) "
+                               "(pressure smoothing stability)");
     if (!(s.rhie_chow_scale > 0.0)) fail("rhie_chow_scale", s.rhie_chow_scale, "> 0");
     if (s.local_step_interval < 1) fail("local_step_interval", s.local_step_interval, ">= 1");
-    if (s.momentum_sweeps < 1) fail("momentum_sweeps", s.momentum_sweeps, ">= 1");
+    if (s.stall_rule.patience < 1) fail("stall_rule.patience", s.stall_rule.patience, ">= 1");
+    if (!(s.stall_rule.progress_factor > 0.0 && s.stall_rule.progress_factor < 1.0))
+        fail("stall_rule.progress_factor", s.stall_rule.progress_factor, "in (0, 1)");
+    if (s.momentum_sweeps < 0)
+        fail("momentum_sweeps", s.momentum_sweeps, ">= 1 (or 0: the scheme's number)");
     if (s.momentum_max_sweeps < 1) fail("momentum_max_sweeps", s.momentum_max_sweeps, ">= 1");
     if (!(s.pressure_tolerance > 0.0)) fail("pressure_tolerance", s.pressure_tolerance, "> 0");
     if (!(s.steady_pressure_tolerance > 0.0 && s.steady_pressure_tolerance < 1.0))
@@ -57,7 +66,7 @@ void check_model_variables(const FlowModel& model) {
 
 FlowSolverCore::FlowSolverCore(const StructuredGrid& g, const FlowConditions& c,
                                const SolverSettings& s)
-    : grid(g), conditions(c), settings(s) {
+    : grid(g), conditions(c), settings(s), requested_scheme(s.steady_scheme) {
     check_settings(c, s);
     nu = 1.0 / c.reynolds;
     const double a = c.alpha_deg * std::numbers::pi / 180.0;
@@ -74,9 +83,12 @@ FlowSolverCore::FlowSolverCore(const StructuredGrid& g, const FlowConditions& c,
     VEER_VERIFY(static_cast<bool>(s.model.make), "model '" + s.model.name + "' cannot be built");
     model = s.model.make(ModelSetup{grid, metrics, geom, faces, connectivity, nu});
     check_model_variables(*model);
+    model->fold_wake_cut_lines(folds_wake_cut_lines());
     if (model->has_eddy_viscosity()) {
         eddy_i.assign(geom.i_faces.area.size(), 0.0);
         eddy_j.assign(geom.j_faces.area.size(), 0.0);
+        eddy_target_i = eddy_i;
+        eddy_target_j = eddy_j;
     }
     FlowFields start;
     start.u.assign(geom.volume.size(), free_stream.x);
@@ -102,10 +114,48 @@ void FlowSolverCore::allocate() {
          {&time_diag, &time_rhs_u, &time_rhs_v, &source_u, &source_v, &outflow, &rhs, &phi})
         f->assign(n, 0.0);
     system.resize(ni, nj);
-    line_work.resize(ni, nj);
+    line_work.prepare(connectivity, folds_wake_cut_lines());
+}
+
+bool FlowSolverCore::relaxes_eddy_viscosity() const {
+    return settings.mode == TimeMode::steady && model->has_eddy_viscosity() &&
+           steady_choices(settings).eddy_viscosity_relaxation < 1.0;
+}
+
+void FlowSolverCore::watch_progress(const StepReport& r) {
+    if (settings.steady_scheme != SteadyScheme::fast || !r.finite) return;
+    // Every equation solved: u, v, continuity and the model's variables.
+    std::vector<double> residuals = {r.residual_u, r.residual_v, r.residual_continuity};
+    residuals.insert(residuals.end(), r.model_residuals.begin(), r.model_residuals.end());
+    if (stall_guard.stalled_after(residuals)) {
+        scheme_fallback_step = steps;
+        fall_back_to_classic();
+    }
+}
+
+/// The same discrete equations (the Rhie-Chow coefficient does not depend on the scheme), the
+/// path of "classic": its pseudo CFL, sweeps, unfolded lines, SIMPLEC increment, and the model's
+/// eddy viscosity as it is. The local steps and the Poisson set-up are renewed at once.
+void FlowSolverCore::fall_back_to_classic() {
+    use_scheme(SteadyScheme::classic);
+    refresh_local_steps();
+}
+
+void FlowSolverCore::use_scheme(SteadyScheme scheme) {
+    settings.steady_scheme = scheme;
+    line_work.prepare(connectivity, folds_wake_cut_lines());
+    model->fold_wake_cut_lines(folds_wake_cut_lines());
+}
+
+bool FlowSolverCore::folds_wake_cut_lines() const {
+    return settings.mode == TimeMode::steady && steady_choices(settings).fold_wake_cut;
 }
 
 void FlowSolverCore::reset_history() {
+    // A new history starts on the scheme the settings asked for.
+    if (settings.steady_scheme != requested_scheme) use_scheme(requested_scheme);
+    scheme_fallback_step = 0;
+    stall_guard = StallGuard(settings.stall_rule);
     time = 0.0;
     dt_previous = 0.0;
     steps = 0;
@@ -162,18 +212,23 @@ void FlowSolverCore::apply_local_steps() {
     fill_copy_ghosts(faces, connectivity, local_dt.view());
     const int ni = geom.ni, nj = geom.nj;
     CellView d = local_dt.view();
+    // D_f = rhie_chow_scale / radius whatever the scheme (the discretisation); gamma is the
+    // scheme's fraction of the local step (the path).
     const double rc = settings.rhie_chow_scale / effective_pseudo_cfl(settings);
+    const double fraction = steady_choices(settings).projection_fraction;
     for (int j = 0; j < nj; ++j)
         for (int f = 0; f <= ni; ++f) {
             const std::size_t k = geom.face_i(f, j);
-            gamma_i[k] = 0.5 * (d(f - 1, j) + d(f, j));
-            rc_i[k] = rc * gamma_i[k];
+            const double step = 0.5 * (d(f - 1, j) + d(f, j));
+            gamma_i[k] = fraction * step;
+            rc_i[k] = rc * step;
         }
     for (int f = 0; f <= nj; ++f)
         for (int i = 0; i < ni; ++i) {
             const std::size_t k = geom.face_j(i, f);
-            gamma_j[k] = 0.5 * (d(i, f - 1) + d(i, f));
-            rc_j[k] = rc * gamma_j[k];
+            const double step = 0.5 * (d(i, f - 1) + d(i, f));
+            gamma_j[k] = fraction * step;
+            rc_j[k] = rc * step;
         }
     pressure_solver->setup(
         make_projection_stencil(geom, connectivity, grid.c_layout(), faces, gamma_i, gamma_j));
@@ -213,7 +268,9 @@ StepReport FlowSolver::advance(double dt, double nominal_dt) {
 StepReport FlowSolver::advance_pseudo_time() {
     VEER_VERIFY(m_impl->settings.mode == TimeMode::steady,
                 "advance_pseudo_time() is the steady step; time-accurate runs call advance(dt)");
-    return m_impl->step(0.0, true);
+    StepReport r = m_impl->step(0.0, true);
+    m_impl->watch_progress(r);
+    return r;
 }
 
 double FlowSolver::time_step_for_cfl(double cfl) const {
@@ -239,5 +296,6 @@ double FlowSolver::far_field_circulation() const { return m_impl->circulation; }
 const std::vector<ModelVariable>& FlowSolver::model_variables() const {
     return m_impl->model->variables();
 }
+long FlowSolver::scheme_fallback_step() const { return m_impl->scheme_fallback_step; }
 
 }  // namespace veer

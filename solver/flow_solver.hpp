@@ -77,6 +77,9 @@ public:
     double far_field_circulation() const;
     /// The turbulence model's transported variables (empty when laminar).
     const std::vector<ModelVariable>& model_variables() const;
+    /// Steady "fast" runs: the step after which the run went on with "classic" because "fast"
+    /// had stopped converging (steady_scheme.hpp); 0 when it has not.
+    long scheme_fallback_step() const;
 
     /// Everything a restart needs to continue bit for bit: fields at two time levels, face
     /// fluxes at two levels, pressure, local time steps, counters, time-step history, vortex.

@@ -14,6 +14,7 @@
 #include "solver/line_relaxation.hpp"
 #include "solver/momentum_system.hpp"
 #include "solver/pressure_solver.hpp"
+#include "solver/stall_guard.hpp"
 
 namespace veer {
 
@@ -43,8 +44,12 @@ struct FlowSolverCore {
     MomentumSystem system;
     LineWork line_work;
     std::unique_ptr<PressureSolver> pressure_solver;
-    std::unique_ptr<FlowModel> model;    ///< the turbulence model (laminar: no variables)
-    std::vector<double> eddy_i, eddy_j;  ///< face eddy viscosity of the current step
+    std::unique_ptr<FlowModel> model;                  ///< the turbulence model (laminar: none)
+    std::vector<double> eddy_i, eddy_j;                ///< face eddy viscosity of the current step
+    std::vector<double> eddy_target_i, eddy_target_j;  ///< the model's, before relaxation
+    StallGuard stall_guard;         ///< "fast" hands over to "classic" when it stalls
+    long scheme_fallback_step = 0;  ///< the step of that hand-over (0: none)
+    SteadyScheme requested_scheme = SteadyScheme::classic;  ///< the settings' scheme
 
     double time = 0.0;
     double dt_previous = 0.0;
@@ -55,12 +60,24 @@ struct FlowSolverCore {
     void allocate();
     void reset_history();
     void update_boundary_values(double t);
+    /// Steady schemes that fold the j-lines of the line relaxation across the wake cut.
+    bool folds_wake_cut_lines() const;
     void refresh_local_steps();
     void apply_local_steps();
     void setup_uniform_pressure();
     StepReport step(double dt, bool steady, double nominal_dt = 0.0);
     void update_vortex();
     void advance_model(double dt, bool steady, StepReport& r);
+    void update_face_eddy_viscosity();
+    /// A steady scheme that under-relaxes the eddy viscosity of a turbulence model (the relaxed
+    /// face values are then part of the state).
+    bool relaxes_eddy_viscosity() const;
+    /// Steady "fast": feeds the step's residuals to the stall guard; on a stall the rest of the
+    /// run takes the numbers of "classic".
+    void watch_progress(const StepReport& r);
+    void fall_back_to_classic();
+    /// Switches the line plans (flow and model) to `scheme`'s; the local steps are not renewed.
+    void use_scheme(SteadyScheme scheme);
 };
 
 }  // namespace veer

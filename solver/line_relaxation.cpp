@@ -7,11 +7,12 @@
 
 namespace veer {
 
-void LineWork::resize(int ni, int nj) {
-    const std::size_t n = static_cast<std::size_t>(ni) * static_cast<std::size_t>(nj);
+void LineWork::prepare(const Connectivity& c, bool fold_wake_cut) {
+    const std::size_t n = static_cast<std::size_t>(c.ni) * static_cast<std::size_t>(c.nj);
     c_prime.assign(n, 0.0);
     d_u.assign(n, 0.0);
     d_v.assign(n, 0.0);
+    j_lines = plan_wall_normal_lines(c, fold_wake_cut);
 }
 
 namespace {
@@ -52,55 +53,16 @@ void solve_line(const MomentumSystem& s, int len, Cell cell, Sub sub, Super supe
     }
 }
 
-/// j-lines of one colour, in blocks of neighbouring columns so that the inner loops run along i
-/// (contiguous memory): forward elimination row by row, then back substitution.
+/// The j-lines colour by colour, chunks of one colour in parallel.
 void sweep_j_lines(const MomentumSystem& s, const Connectivity& con, CellView u, CellView v,
                    LineWork& w) {
-    const int ni = con.ni, nj = con.nj;
-    constexpr int block = 64;
-    const int blocks = (ni + block - 1) / block;
-    for (int colour = 0; colour < 2; ++colour) {
+    VEER_VERIFY(!w.j_lines.colours.empty(), "line relaxation used before LineWork::prepare");
+    const long cells = static_cast<long>(con.ni) * con.nj / 2;
+    for (const std::vector<LineChunk>& chunks : w.j_lines.colours) {
         fill_connected_ghosts(con, u);
         fill_connected_ghosts(con, v);
-        for_each_line(0, blocks, 1, static_cast<long>(ni) * nj / 2, [&](int b) {
-            const int i0 = b * block + ((b * block) % 2 == colour ? 0 : 1);
-            const int i1 = std::min(ni, (b + 1) * block);
-            for (int j = 0; j < nj; ++j)
-                for (int i = i0; i < i1; i += 2) {
-                    const std::size_t c = idx(ni, i, j);
-                    double eu = s.west[c] * u(i - 1, j) + s.east[c] * u(i + 1, j);
-                    double ev = s.west[c] * v(i - 1, j) + s.east[c] * v(i + 1, j);
-                    double a = 0.0, prev_c = 0.0, prev_u = 0.0, prev_v = 0.0;
-                    if (j == 0) {
-                        eu += s.south[c] * u(i, -1);
-                        ev += s.south[c] * v(i, -1);
-                    } else {
-                        const std::size_t below = c - static_cast<std::size_t>(ni);
-                        a = s.south[c];
-                        prev_c = w.c_prime[below];
-                        prev_u = w.d_u[below];
-                        prev_v = w.d_v[below];
-                    }
-                    if (j == nj - 1) {
-                        eu += s.north[c] * u(i, nj);
-                        ev += s.north[c] * v(i, nj);
-                    }
-                    const double inv = 1.0 / (s.diag[c] - a * prev_c);
-                    w.c_prime[c] = (j + 1 < nj ? s.north[c] : 0.0) * inv;
-                    w.d_u[c] = (s.rhs_u[c] + eu + a * prev_u) * inv;
-                    w.d_v[c] = (s.rhs_v[c] + ev + a * prev_v) * inv;
-                }
-            for (int i = i0; i < i1; i += 2) {
-                const std::size_t c = idx(ni, i, nj - 1);
-                u(i, nj - 1) = w.d_u[c];
-                v(i, nj - 1) = w.d_v[c];
-            }
-            for (int j = nj - 2; j >= 0; --j)
-                for (int i = i0; i < i1; i += 2) {
-                    const std::size_t c = idx(ni, i, j);
-                    u(i, j) = w.d_u[c] + w.c_prime[c] * u(i, j + 1);
-                    v(i, j) = w.d_v[c] + w.c_prime[c] * v(i, j + 1);
-                }
+        for_each_line(0, static_cast<int>(chunks.size()), 1, cells, [&](int k) {
+            relax_line_chunk(s, con, chunks[static_cast<std::size_t>(k)], u, v, w);
         });
     }
 }

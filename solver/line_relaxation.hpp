@@ -1,21 +1,25 @@
 #pragma once
-/// Alternating-direction line relaxation of the momentum system: red-black sweeps of tridiagonal
-/// solves along j-lines (wall-normal on a C-grid, where thin wall cells couple strongly), then
-/// along i-lines. Couplings across the wake cut and periodic sides are taken from the ghosts,
-/// refreshed between colours. Lines of one colour are independent, so the result does not
-/// depend on the thread count.
+/// Alternating-direction line relaxation of the momentum system: coloured sweeps of tridiagonal
+/// solves along j-lines (wall-normal on a C-grid, where thin wall cells couple strongly;
+/// wall_normal_lines.hpp, optionally folded across the wake cut), then red-black sweeps along
+/// i-lines. Couplings across the wake cut (outside a folded line) and periodic sides are taken
+/// from the ghosts, refreshed between colours. Lines of one colour are independent, so the
+/// result does not depend on the thread count.
 #include <vector>
 
 #include "solver/cell_field.hpp"
 #include "solver/connectivity.hpp"
 #include "solver/momentum_system.hpp"
+#include "solver/wall_normal_lines.hpp"
 
 namespace veer {
 
-/// Scratch space of the line solves (sized once).
-struct LineWork {
-    std::vector<double> c_prime, d_u, d_v;
-    void resize(int ni, int nj);
+/// Scratch space and j-line plan of the line solves (prepared once per block).
+struct LineWork : LineScratch {
+    WallNormalLines j_lines;
+    /// Sizes the scratch space for the block of `c` and plans its j-lines; `fold_wake_cut`
+    /// joins each wake column with its mirror across the cut in one line.
+    void prepare(const Connectivity& c, bool fold_wake_cut);
 };
 
 /// What a relaxation did.

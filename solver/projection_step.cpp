@@ -172,7 +172,7 @@ StepReport FlowSolverCore::step(double dt, bool steady, double nominal_dt) {
     in.time_rhs_u = &time_rhs_u;
     in.time_rhs_v = &time_rhs_v;
     if (model->has_eddy_viscosity()) {
-        model->face_eddy_viscosity(eddy_i, eddy_j);
+        update_face_eddy_viscosity();
         in.eddy_i = &eddy_i;
         in.eddy_j = &eddy_j;
     }
@@ -185,7 +185,7 @@ StepReport FlowSolverCore::step(double dt, bool steady, double nominal_dt) {
     const RelaxationStats ms =
         steady
             ? relax_momentum(system, connectivity, vel_new.u.view(), vel_new.v.view(),
-                             settings.momentum_sweeps, 0.0, line_work)
+                             effective_momentum_sweeps(settings), 0.0, line_work)
             : relax_momentum(system, connectivity, vel_new.u.view(), vel_new.v.view(),
                              settings.momentum_max_sweeps, settings.momentum_tolerance, line_work);
     fill_velocity_ghosts(faces, connectivity, vel_new.u.view(), vel_new.v.view());
@@ -254,6 +254,21 @@ void FlowSolverCore::advance_model(double dt, bool steady, StepReport& r) {
         r.worst_j = m.worst_j;
         r.worst_variable = m.worst_variable;
     }
+}
+
+/// The model's face eddy viscosity, under-relaxed in steady schemes that ask for it (from the
+/// second step of a history on: the first takes the model's value).
+void FlowSolverCore::update_face_eddy_viscosity() {
+    const double factor = steady_choices(settings).eddy_viscosity_relaxation;
+    if (!relaxes_eddy_viscosity() || steps == 0) {
+        model->face_eddy_viscosity(eddy_i, eddy_j);
+        return;
+    }
+    model->face_eddy_viscosity(eddy_target_i, eddy_target_j);
+    for (std::size_t k = 0; k < eddy_i.size(); ++k)
+        eddy_i[k] += factor * (eddy_target_i[k] - eddy_i[k]);
+    for (std::size_t k = 0; k < eddy_j.size(); ++k)
+        eddy_j[k] += factor * (eddy_target_j[k] - eddy_j[k]);
 }
 
 void FlowSolverCore::update_vortex() {

@@ -8,6 +8,8 @@
 #include "solver/flow_model.hpp"
 #include "solver/laminar_model.hpp"
 #include "solver/pressure_solver.hpp"
+#include "solver/stall_guard.hpp"
+#include "solver/steady_scheme.hpp"
 
 namespace veer {
 
@@ -19,13 +21,20 @@ struct SolverSettings {
     TimeMode mode = TimeMode::steady;
 
     // Steady pseudo-time marching.
-    /// Local time step = pseudo_cfl / spectral radius; 0: the default of the model
-    /// (ModelDescriptor::steady_pseudo_cfl, effective_pseudo_cfl()).
+    /// The path to the steady state (steady_scheme.hpp); the converged state is the same.
+    SteadyScheme steady_scheme = SteadyScheme::classic;
+    /// Local time step = pseudo_cfl / spectral radius; 0: the default of the scheme and model
+    /// (ModelDescriptor::steady_pseudo_cfl for "classic"; effective_pseudo_cfl()).
     double pseudo_cfl = 0.0;
     double viscous_weight = 0.25;  ///< weight of the viscous radius in the local step
     int local_step_interval = 20;  ///< local steps (and the Poisson set-up) renewed every N
-    double rhie_chow_scale = 0.5;  ///< D_f = rhie_chow_scale * local step / pseudo_cfl
-    int momentum_sweeps = 2;       ///< line-relaxation sweeps per pseudo step
+    /// Rhie-Chow coefficient D_f = rhie_chow_scale / spectral radius (= rhie_chow_scale x local
+    /// step / pseudo_cfl): part of the discretisation, the same in every scheme.
+    double rhie_chow_scale = 0.5;
+    /// Line-relaxation sweeps per pseudo step; 0: the scheme's (effective_momentum_sweeps()).
+    int momentum_sweeps = 0;
+    /// When a "fast" run counts as stalled and goes on with "classic" (stall_guard.hpp).
+    StallRule stall_rule;
 
     // Time-accurate stepping.
     /// Relative residual of the momentum solves. 1e-6: against 1e-9 the same Strouhal number,
@@ -60,9 +69,20 @@ struct SolverSettings {
     std::function<Vec2(Vec2 x, double t)> body_force;
 };
 
+/// The numbers of the scheme a solver with these settings uses ("classic" takes the model's
+/// pseudo CFL, ModelDescriptor::steady_pseudo_cfl).
+inline SteadySchemeChoices steady_choices(const SolverSettings& s) {
+    return steady_scheme_choices(s.steady_scheme, s.model.steady_pseudo_cfl);
+}
+
 /// The pseudo CFL number a solver with these settings uses.
 inline double effective_pseudo_cfl(const SolverSettings& s) {
-    return s.pseudo_cfl > 0.0 ? s.pseudo_cfl : s.model.steady_pseudo_cfl;
+    return s.pseudo_cfl > 0.0 ? s.pseudo_cfl : steady_choices(s).pseudo_cfl;
+}
+
+/// Momentum line-relaxation sweeps per pseudo step.
+inline int effective_momentum_sweeps(const SolverSettings& s) {
+    return s.momentum_sweeps > 0 ? s.momentum_sweeps : steady_choices(s).momentum_sweeps;
 }
 
 }  // namespace veer

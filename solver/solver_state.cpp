@@ -25,6 +25,30 @@ const NamedArray& find_array(const std::vector<NamedArray>& state, const std::st
                      "flow solver has it)");
 }
 
+bool has_array(const std::vector<NamedArray>& state, const std::string& name) {
+    for (const NamedArray& a : state)
+        if (a.name == name) return true;
+    return false;
+}
+
+/// The stall guard and the scheme it left the run on (a state without the record, from an
+/// older version or a "classic" run: a fresh guard).
+void restore_stall_guard(FlowSolverCore& s, const std::vector<NamedArray>& state) {
+    if (s.settings.steady_scheme != s.requested_scheme) s.use_scheme(s.requested_scheme);
+    s.scheme_fallback_step = 0;
+    s.stall_guard = StallGuard(s.settings.stall_rule);
+    const NamedArray* record = nullptr;
+    for (const NamedArray& a : state)
+        if (a.name == "steady_stall_guard") record = &a;
+    if (record == nullptr) return;
+    const std::vector<double>& g = record->values;
+    if (g.empty()) throw InputError("solver state array 'steady_stall_guard' is empty");
+    s.stall_guard.load(std::vector<double>(g.begin() + 1, g.end()));
+    if (s.requested_scheme != SteadyScheme::fast) return;  // nothing to fall back from
+    s.scheme_fallback_step = static_cast<long>(g[0]);
+    if (s.scheme_fallback_step > 0) s.use_scheme(SteadyScheme::classic);
+}
+
 }  // namespace
 
 std::vector<NamedArray> FlowSolver::state() const {
@@ -43,6 +67,15 @@ std::vector<NamedArray> FlowSolver::state() const {
         {"clock", {s.time, static_cast<double>(s.steps), s.dt_previous, s.circulation}},
     };
     for (NamedArray& a : s.model->values()) out.push_back(std::move(a));
+    if (s.settings.mode == TimeMode::steady) {
+        std::vector<double> guard = s.stall_guard.save();
+        guard.insert(guard.begin(), static_cast<double>(s.scheme_fallback_step));
+        out.push_back({"steady_stall_guard", guard});
+    }
+    if (s.relaxes_eddy_viscosity()) {
+        out.push_back({"eddy_viscosity_i", s.eddy_i});
+        out.push_back({"eddy_viscosity_j", s.eddy_j});
+    }
     return out;
 }
 
@@ -68,6 +101,16 @@ void FlowSolver::restore(const std::vector<NamedArray>& state) {
     for (const ModelVariable& v : s.model->variables())
         model_state.push_back(find_array(state, v.name, n));
     s.model->set_values(model_state);
+    if (s.settings.mode == TimeMode::steady) restore_stall_guard(s, state);
+    if (s.relaxes_eddy_viscosity()) {
+        // A state from a scheme without relaxation has none: start from the model's value.
+        if (has_array(state, "eddy_viscosity_i")) {
+            s.eddy_i = find_array(state, "eddy_viscosity_i", s.eddy_i.size()).values;
+            s.eddy_j = find_array(state, "eddy_viscosity_j", s.eddy_j.size()).values;
+        } else {
+            s.model->face_eddy_viscosity(s.eddy_i, s.eddy_j);
+        }
+    }
     if (s.settings.mode == TimeMode::steady) {
         // Rebuild the face steps and Poisson set-up from the stored local steps, as the
         // uninterrupted run built them at its last renewal.

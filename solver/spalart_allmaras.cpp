@@ -52,7 +52,7 @@ SpalartAllmaras::SpalartAllmaras(const FaceGeometry& geom, const std::vector<Bou
             m_manufactured[k] = m_settings.manufactured_source(geom.centroid[k]);
     m_face_work.resize(geom);
     m_system.resize(ni, nj);
-    m_work.resize(ni, nj);
+    m_work.prepare(connectivity, m_settings.fold_wake_cut_lines);
     set_nu_tilde(std::vector<double>(n, free_stream_nu_tilde()));
 }
 
@@ -167,6 +167,11 @@ TurbulenceReport SpalartAllmaras::finish(const ModelStepInputs& in) {
     std::swap(m_nu_tilde, m_nu_tilde_new);
     fill_ghosts(m_nu_tilde.view());
     return r;
+}
+
+void SpalartAllmaras::fold_wake_cut_lines(bool fold) {
+    m_settings.fold_wake_cut_lines = fold;
+    m_work.prepare(*m_connectivity, fold);
 }
 
 std::vector<double> SpalartAllmaras::eddy_viscosity() const {

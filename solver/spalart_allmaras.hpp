@@ -65,6 +65,9 @@ public:
     void set_source_modifiers(const std::vector<double>* production_factor,
                               const std::vector<double>* trip_ft2);
     const std::vector<double>& wall_distance() const { return m_wall_distance; }
+    /// Whether the j-lines of the line solves continue across the wake cut (the steady scheme's
+    /// choice; the converged state does not depend on it).
+    void fold_wake_cut_lines(bool fold);
 
 private:
     void fill_ghosts(CellView q);

@@ -37,6 +37,8 @@ public:
         m_core.face_eddy_viscosity(on_i, on_j);
     }
 
+    void fold_wake_cut_lines(bool fold) override { m_core.fold_wake_cut_lines(fold); }
+
     std::vector<NamedArray> values() const override { return {{variable_name, m_core.nu_tilde()}}; }
     void set_values(const std::vector<NamedArray>& arrays) override {
         for (const NamedArray& a : arrays)

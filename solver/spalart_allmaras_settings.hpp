@@ -23,6 +23,10 @@ struct SpalartAllmarasSettings {
     /// 384 x 128 in 1348 (1334 with 10). Probably the explicit parts (deferred-correction
     /// convection, production) bound the stable step.
     double time_step_scale = 3.0;
+    /// The j-lines of the line relaxation continue across the wake cut (wall_normal_lines.hpp);
+    /// the flow solver sets it through FlowModel::fold_wake_cut_lines for the steady schemes
+    /// that fold them.
+    bool fold_wake_cut_lines = false;
     /// Off only in the transport-operator verification (manufactured solutions).
     bool model_sources = true;
     /// Value on prescribed-velocity faces (manufactured solutions); empty: 0 (moving walls).

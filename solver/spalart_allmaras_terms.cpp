@@ -20,10 +20,15 @@ double sa_fv2(double chi) { return 1.0 - chi / (1.0 + chi * sa_fv1(chi)); }
 double sa_ft2(double chi) { return C::ct3 * std::exp(-C::ct4 * chi * chi); }
 
 double sa_fw(double r) {
-    const double r6 = std::pow(r, 6);
-    const double g = r + C::cw2 * (r6 - r);
-    const double cw3_6 = std::pow(C::cw3, 6);
-    return g * std::pow((1.0 + cw3_6) / (std::pow(g, 6) + cw3_6), 1.0 / 6.0);
+    // Powers by products and the sixth root as a cube root of a square root: std::pow took a
+    // fifth of a Spalart-Allmaras step (perf, NACA 0012 384 x 128); the values agree to round-off.
+    auto sixth = [](double x) {
+        const double x2 = x * x;
+        return x2 * x2 * x2;
+    };
+    const double g = r + C::cw2 * (sixth(r) - r);
+    const double cw3_6 = sixth(C::cw3);
+    return g * std::cbrt(std::sqrt((1.0 + cw3_6) / (sixth(g) + cw3_6)));
 }
 
 double sa_fn(double chi) {

@@ -89,7 +89,8 @@ TEST(ChoiceKeys, CheckAndRunAgreeOnEveryWordOfEveryChoiceKey) {
     test::write_text(scratch / "tiny.toml", test::tiny_case_text());
     test::write_text(scratch / "tiny_file.toml", tiny_file_case_text(scratch));
     const std::vector<ChoiceKey> keys = case_choice_keys();
-    ASSERT_EQ(keys.size(), 5u);  // trailing_edge, chord_line, model, mode, pressure_solver
+    // trailing_edge, chord_line, model, mode, pressure_solver, steady_scheme
+    ASSERT_EQ(keys.size(), 6u);
     int runs = 0, accepted_words = 0;
     for (const ChoiceKey& key : keys) {
         ASSERT_FALSE(key.words.empty()) << key.key;
@@ -105,19 +106,23 @@ TEST(ChoiceKeys, CheckAndRunAgreeOnEveryWordOfEveryChoiceKey) {
             accepted_words += v.check && v.run;
         }
     }
-    // open/closed, three chord lines, two models, two modes, three pressure solvers
-    EXPECT_EQ(accepted_words, 2 + 3 + 2 + 2 + 3);
+    // open/closed, three chord lines, two models, two modes, three pressure solvers, two
+    // steady schemes
+    EXPECT_EQ(accepted_words, 2 + 3 + 2 + 2 + 3 + 2);
 }
 
 TEST(ChoiceKeys, CheckAppliesTheRulesRunApplies) {
     test::AppScratch scratch;
     test::write_text(scratch / "tiny.toml", test::tiny_case_text());
     int runs = 0;
-    // The steady pressure smoothing needs a pseudo CFL above 0.25; the tiny grid reaches
-    // 10 chords, so a contour or wake station at 50 chords has no grid line.
+    // The steady pressure smoothing needs a pseudo CFL above 0.25 with "classic" and above
+    // 0.25 / 0.6 with "fast" (the default); the tiny grid reaches 10 chords, so a contour or
+    // wake station at 50 chords has no grid line.
     const std::vector<std::pair<std::vector<std::string>, bool>> cases = {
-        {{"run.cfl=0.2"}, false},
-        {{"run.cfl=0.3"}, true},
+        {{"run.cfl=0.2", "run.steady_scheme=\"classic\""}, false},
+        {{"run.cfl=0.3", "run.steady_scheme=\"classic\""}, true},
+        {{"run.cfl=0.4"}, false},
+        {{"run.cfl=0.45"}, true},
         {{"run.cfl=0.2", "run.mode=\"unsteady\""}, true},
         {{"post.wake_stations=[50.0]"}, false},
         {{"post.wake_stations=[2.0]"}, true},

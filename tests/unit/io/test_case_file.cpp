@@ -88,6 +88,18 @@ TEST(CaseFile, WrongTypeAndOutOfRangeNameTheAllowedValues) {
     EXPECT_NE(error_of(text).find("spalart-allmaras"), std::string::npos);
 }
 
+TEST(CaseFile, SteadySchemeIsFastUnlessTheCaseAsksForClassic) {
+    EXPECT_EQ(parse_case_text(minimal_case, "case.toml", ".").run.steady_scheme,
+              SteadyScheme::fast);
+    const std::string text = std::string(minimal_case) + "[run]\nsteady_scheme = \"classic\"\n";
+    EXPECT_EQ(parse_case_text(text, "case.toml", ".").run.steady_scheme, SteadyScheme::classic);
+    const std::string msg =
+        error_of(std::string(minimal_case) + "[run]\nsteady_scheme = \"slow\"\n");
+    EXPECT_NE(msg.find("case.toml:14"), std::string::npos) << msg;
+    EXPECT_NE(msg.find("steady_scheme"), std::string::npos) << msg;
+    EXPECT_NE(msg.find("\"classic\" or \"fast\""), std::string::npos) << msg;
+}
+
 TEST(CaseFile, GeometryNeedsExactlyOneSource) {
     std::string text = minimal_case;
     text.replace(text.find("naca = \"0012\""), 13, "");
@@ -196,11 +208,17 @@ TEST(CaseFile, ChoiceKeysAreTypedWithOneSpelling) {
 }
 
 TEST(CaseFile, SteadyCflBelowThePressureSmoothingLimitIsRefused) {
-    // rhie_chow_scale 0.5: the steady pseudo CFL must exceed 0.25 (solver/README.md).
-    const std::string msg = error_of(minimal_case, {"run.cfl=0.2"});
+    // rhie_chow_scale 0.5: the steady pseudo CFL must exceed 0.25 with "classic" and
+    // 0.25 / 0.6 with "fast" (projection fraction 0.6; solver/README.md), as the solver demands.
+    const std::string classic = "run.steady_scheme=classic";
+    const std::string msg = error_of(minimal_case, {"run.cfl=0.2", classic});
     EXPECT_NE(msg.find("cfl = 0.2"), std::string::npos) << msg;
     EXPECT_NE(msg.find("above 0.25"), std::string::npos) << msg;
-    EXPECT_EQ(error_of(minimal_case, {"run.cfl=0.3"}), "");
+    EXPECT_EQ(error_of(minimal_case, {"run.cfl=0.3", classic}), "");
+    const std::string fast = error_of(minimal_case, {"run.cfl=0.4"});
+    EXPECT_NE(fast.find("above 0.417"), std::string::npos) << fast;
+    EXPECT_NE(fast.find("\"fast\""), std::string::npos) << fast;
+    EXPECT_EQ(error_of(minimal_case, {"run.cfl=0.42"}), "");
     EXPECT_EQ(error_of(minimal_case, {"run.cfl=0.2", "run.mode=unsteady"}), "");
 }
 

@@ -48,7 +48,7 @@ public:
         m_variables.push_back({scalar_name, "c", column});
         m_conditions = scalar_face_conditions(s.faces, column);
         m_system.resize(s.geom.ni, s.geom.nj);
-        m_work.resize(s.geom.ni, s.geom.nj);
+        m_work.prepare(s.connectivity, false);  // j-lines end at a wake cut
     }
 
     const std::vector<ModelVariable>& variables() const override { return m_variables; }

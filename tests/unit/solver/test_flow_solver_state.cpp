@@ -95,21 +95,59 @@ TEST(Restart, TurbulenceModelStateIsPartOfTheRestart) {
     s.mode = TimeMode::steady;
     s.local_step_interval = 7;
     s.model = spalart_allmaras_descriptor();
-    FlowSolver whole(g, {1e5, 0.0}, s);
-    step(whole, TimeMode::steady, 20);
-    FlowSolver first(g, {1e5, 0.0}, s);
-    step(first, TimeMode::steady, 8);
-    FlowSolver second(g, {1e5, 0.0}, s);
+    // The fast scheme's under-relaxed eddy viscosity is state too.
+    for (SteadyScheme scheme : {SteadyScheme::classic, SteadyScheme::fast}) {
+        s.steady_scheme = scheme;
+        FlowSolver whole(g, {1e5, 0.0}, s);
+        step(whole, TimeMode::steady, 20);
+        FlowSolver first(g, {1e5, 0.0}, s);
+        step(first, TimeMode::steady, 8);
+        FlowSolver second(g, {1e5, 0.0}, s);
+        second.restore(first.state());
+        step(second, TimeMode::steady, 12);
+        expect_same_bits(whole.fields(), second.fields());
+        const FlowFields a = whole.fields(), b = second.fields();
+        ASSERT_EQ(a.model_fields.size(), 1u);
+        ASSERT_EQ(a.model_fields[0].name, "nu_tilde");
+        ASSERT_EQ(b.model_fields.size(), 1u);
+        const std::vector<double>&nt_a = a.model_fields[0].values, &nt_b = b.model_fields[0].values;
+        ASSERT_EQ(nt_a.size(), 256u);
+        for (std::size_t k = 0; k < nt_a.size(); ++k) EXPECT_EQ(nt_a[k], nt_b[k]);
+    }
+}
+
+TEST(Restart, AFastRunHandedOverToClassicRestartsOnClassic) {
+    // A rule no iteration can satisfy: "fast" hands over after reference_steps + patience + 1.
+    SolverSettings s = settings(TimeMode::steady);
+    s.steady_scheme = SteadyScheme::fast;
+    s.stall_rule.reference_steps = 3;
+    s.stall_rule.patience = 5;
+    s.stall_rule.progress_factor = 1e-300;
+    s.stall_rule.converged_floor = 0.0;
+    const StructuredGrid g = cavity();
+    FlowSolver whole(g, {400.0, 0.0}, s);
+    whole.initialize(at_rest());
+    step(whole, TimeMode::steady, 30);
+    EXPECT_EQ(whole.scheme_fallback_step(), 9);
+
+    FlowSolver first(g, {400.0, 0.0}, s);
+    first.initialize(at_rest());
+    step(first, TimeMode::steady, 12);  // after the hand-over, between renewals of the steps
+    ASSERT_EQ(first.scheme_fallback_step(), 9);
+    FlowSolver second(g, {400.0, 0.0}, s);
     second.restore(first.state());
-    step(second, TimeMode::steady, 12);
+    EXPECT_EQ(second.scheme_fallback_step(), 9);
+    step(second, TimeMode::steady, 18);
     expect_same_bits(whole.fields(), second.fields());
-    const FlowFields a = whole.fields(), b = second.fields();
-    ASSERT_EQ(a.model_fields.size(), 1u);
-    ASSERT_EQ(a.model_fields[0].name, "nu_tilde");
-    ASSERT_EQ(b.model_fields.size(), 1u);
-    const std::vector<double>&nt_a = a.model_fields[0].values, &nt_b = b.model_fields[0].values;
-    ASSERT_EQ(nt_a.size(), 256u);
-    for (std::size_t k = 0; k < nt_a.size(); ++k) EXPECT_EQ(nt_a[k], nt_b[k]);
+
+    // A new history starts on "fast" again, and a state before the hand-over has none.
+    first.initialize(at_rest());
+    EXPECT_EQ(first.scheme_fallback_step(), 0);
+    FlowSolver early(g, {400.0, 0.0}, s);
+    early.initialize(at_rest());
+    step(early, TimeMode::steady, 4);
+    second.restore(early.state());
+    EXPECT_EQ(second.scheme_fallback_step(), 0);
 }
 
 TEST(Restart, MissingArrayIsAnInputErrorNamingIt) {

@@ -156,9 +156,10 @@ TEST(TurbulenceModel, LaminarGivesZerosAndNamesParse) {
 }
 
 TEST(TurbulenceModel, PseudoCflDefaultsByModelAndAnExplicitOneWins) {
-    // The turbulent default is the largest of 5, 4, 3 that converged the NACA 0012 at Re 6e6
-    // on a y+ 1 grid (solver_settings.hpp); the laminar one is unchanged.
+    // The classic scheme's turbulent default is the largest of 5, 4, 3 that converged the
+    // NACA 0012 at Re 6e6 on a y+ 1 grid (solver_settings.hpp); the laminar one is unchanged.
     SolverSettings s;
+    s.steady_scheme = SteadyScheme::classic;
     EXPECT_EQ(effective_pseudo_cfl(s), laminar_pseudo_cfl);
     s.model = spalart_allmaras_descriptor();
     EXPECT_EQ(effective_pseudo_cfl(s), spalart_allmaras_pseudo_cfl);
