@@ -83,7 +83,10 @@ TEST(SweepLowRe, UnsteadinessSetsInNearEightDegrees) {
     ASSERT_GE(s.cycles, 3);
     const double counted = s.cycles / (s.window_end - s.window_begin);
     EXPECT_NEAR(*s.strouhal, counted, counted / s.cycles);
-    EXPECT_DOUBLE_EQ(*s.strouhal, *at10.strouhal);  // the record holds the same extraction
+    // The record holds the same extraction. It reads the force history from memory at full
+    // precision, this test from history.csv's printed digits (8 decimals), so they agree to the
+    // rounding of the file, not to the last bit: measured 3e-9 relative.
+    EXPECT_NEAR(*s.strouhal, *at10.strouhal, 1e-7 * *at10.strouhal);
     fs::remove_all(work);
 }
 
