@@ -117,6 +117,16 @@ void run_first_part(const CaseSpec& part, const std::filesystem::path& dir) {
     ASSERT_EQ(first.run().steps, part.run.steps);
 }
 
+/// Resumes the run in `dir` from its checkpoint as `whole` and runs it to its step cap.
+void resume_to_end(const CaseSpec& whole, const std::filesystem::path& dir) {
+    SimulationOptions quiet;
+    quiet.progress = false;
+    const CheckpointData saved = read_checkpoint(dir / "checkpoint.h5");
+    Simulation resumed(whole, saved.grid, dir, quiet);
+    resumed.resume(saved);
+    EXPECT_EQ(resumed.run().steps, whole.run.steps);
+}
+
 TEST(SimulationRestart, SteadyRunContinuesBitForBit) { restart_reproduces("steady"); }
 
 TEST(SimulationRestart, UnsteadyRunContinuesBitForBit) { restart_reproduces("unsteady"); }
@@ -147,16 +157,11 @@ TEST(SimulationRestart, SpalartAllmarasRunContinuesBitForBit) {
 
 TEST(SimulationRestart, OlderLaminarCheckpointResumes) {
     test::AppScratch scratch;
-    SimulationOptions quiet;
-    quiet.progress = false;
     const CaseSpec part = small_case("steady", 30);
     run_first_part(part, scratch.path());
     make_legacy(scratch.path());
     const CaseSpec whole = small_case("steady", 33);
-    const CheckpointData saved = read_checkpoint(scratch / "checkpoint.h5");
-    Simulation resumed(whole, saved.grid, scratch.path(), quiet);
-    resumed.resume(saved);
-    EXPECT_EQ(resumed.run().steps, 33);
+    resume_to_end(whole, scratch.path());
     // A laminar run has no model column; rows 1-30 are kept, 31-33 appended.
     const std::string history = test::read_text(scratch / "history.csv");
     EXPECT_EQ(history.substr(0, history.find('\n')),
@@ -170,8 +175,6 @@ TEST(SimulationRestart, LaminarCheckpointOfTheFourSlotMonitorResumes) {
     // model's, 0 when laminar) after marker -2, and history.csv with a zero residual_nu_tilde
     // column, which a laminar run no longer writes.
     test::AppScratch scratch;
-    SimulationOptions quiet;
-    quiet.progress = false;
     const CaseSpec part = small_case("steady", 30);
     run_first_part(part, scratch.path());
     rewrite_record(scratch.path(), [](double count, const std::vector<double>& refs,
@@ -187,10 +190,7 @@ TEST(SimulationRestart, LaminarCheckpointOfTheFourSlotMonitorResumes) {
         at = end + 1;
     }
     test::write_text(scratch / "history.csv", padded);
-    const CheckpointData saved = read_checkpoint(scratch / "checkpoint.h5");
-    Simulation resumed(small_case("steady", 33), saved.grid, scratch.path(), quiet);
-    resumed.resume(saved);
-    EXPECT_EQ(resumed.run().steps, 33);
+    resume_to_end(small_case("steady", 33), scratch.path());
     const std::string history = test::read_text(scratch / "history.csv");
     EXPECT_EQ(history.substr(0, history.find('\n')),
               "step,time,residual_u,residual_v,residual_continuity,cl,cd,cm");
@@ -202,16 +202,10 @@ TEST(SimulationRestart, HistoryWithoutTheModelColumnIsPadded) {
     // An SA run whose history lacks the model's column (written before it was recorded):
     // the kept rows read "nan" there (not recorded), the new ones the residual.
     test::AppScratch scratch;
-    SimulationOptions quiet;
-    quiet.progress = false;
     const CaseSpec part = small_case("steady", 15, "spalart-allmaras");
     run_first_part(part, scratch.path());
     drop_last_history_column(scratch.path());
-    const CheckpointData saved = read_checkpoint(scratch / "checkpoint.h5");
-    Simulation resumed(small_case("steady", 18, "spalart-allmaras"), saved.grid, scratch.path(),
-                       quiet);
-    resumed.resume(saved);
-    EXPECT_EQ(resumed.run().steps, 18);
+    resume_to_end(small_case("steady", 18, "spalart-allmaras"), scratch.path());
     const std::string history = test::read_text(scratch / "history.csv");
     EXPECT_EQ(history.substr(0, history.find('\n')),
               "step,time,residual_u,residual_v,residual_continuity,cl,cd,cm,residual_nu_tilde");
