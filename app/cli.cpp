@@ -4,6 +4,7 @@
 #include <iostream>
 
 #include "app/commands.hpp"
+#include "app/reader_labels.hpp"
 #include "mesh/errors.hpp"
 
 namespace veer {
@@ -19,7 +20,10 @@ void add_case_options(CLI::App& sub, CaseOptions& o) {
 CLI::App* add_sweep_subcommand(CLI::App& app, SweepOptions& o) {
     CLI::App* sweep = app.add_subcommand("sweep", "solve a case over a range of angles of attack");
     add_case_options(*sweep, o.input);
-    sweep->add_option("--alpha", o.alpha, "angles in degrees: START:END:STEP or a,b,c")
+    sweep
+        ->add_option("--alpha", o.alpha,
+                     "angles in degrees: START:END:STEP (e.g. 0:12:2 is 0, 2, ... 12: start, end, "
+                     "step) or a list a,b,c")
         ->required()
         ->type_name("ANGLES");
     sweep->add_option("-o,--output", o.out_dir, "sweep folder (one run folder per point)")
@@ -45,6 +49,9 @@ CLI::App* add_sweep_subcommand(CLI::App& app, SweepOptions& o) {
         ->check(CLI::NonNegativeNumber);
     sweep->add_flag("--force", o.force, "write into a folder that holds another study");
     sweep->add_flag("-q,--quiet", o.quiet, "no live progress line");
+    sweep->footer(
+        "e.g. veer sweep CASE --alpha 0:12:2 -o DIR  (start 0, end 12, step 2 degrees)\n\n" +
+        std::string(reader_caution()) + ".");
     return sweep;
 }
 
@@ -54,7 +61,8 @@ int run_cli(int argc, char** argv) {
     CLI::App app{"veer: 2D incompressible flow about airfoil sections, lift computed two ways"};
     app.set_version_flag("--version", std::string("veer ") + VEER_VERSION);
     app.require_subcommand(1);
-    app.footer("Run `veer SUBCOMMAND --help` for the options of each subcommand.");
+    app.footer("Run `veer SUBCOMMAND --help` for the options of each subcommand.\n\n" +
+               std::string(reader_caution()) + ".");
 
     CaseOptions check_opts;
     CLI::App* check = app.add_subcommand("check", "validate a case file without running it");
@@ -69,6 +77,7 @@ int run_cli(int argc, char** argv) {
 
     RunOptions run_opts;
     CLI::App* run = app.add_subcommand("run", "solve the flow of a case");
+    run->footer(std::string(reader_caution()) + ".");
     run->add_option("case", run_opts.input.case_file, "case file (TOML)")->check(CLI::ExistingFile);
     run->add_option("--set", run_opts.input.overrides, "override a case value (repeatable)")
         ->type_name("TABLE.KEY=VALUE");

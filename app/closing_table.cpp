@@ -5,7 +5,9 @@
 #include <cmath>
 #include <string>
 
+#include "app/reader_labels.hpp"
 #include "app/run_report.hpp"
+#include "postprocess/wake_profiles.hpp"
 
 namespace veer {
 namespace {
@@ -23,23 +25,21 @@ std::string separation_text(const SurfaceSeparation& s) {
     return out;
 }
 
-/// The reference length's name in the table's words.
-const char* lengths(const CaseSpec& spec) { return spec.geometry.circle ? "diameters" : "chords"; }
-
 void print_routes(const CaseSpec& spec, const RunAnalysis& a, bool unsteady) {
     const double cl = a.forces.cl.total;
-    const char* unit = lengths(spec);
-    fmt::print("  {:<34} {:>10} {:>10} {:>10}\n", "route", "Cl", "Cd", "dCl");
-    fmt::print("  {:<34} {:>10.5f} {:>10.5f} {:>10}\n", "surface (pressure + friction)", cl,
+    const bool circle = spec.geometry.circle;
+    fmt::print("  {:<34} {:>10} {:>10} {:>13}\n", "route", "Cl", "Cd", difference_header);
+    fmt::print("  {:<34} {:>10.5f} {:>10.5f} {:>13}\n", "surface (pressure + friction)", cl,
                a.forces.cd.total, "-");
     for (const RouteComparison& r : a.routes)
-        fmt::print("  {:<34} {:>10.5f} {:>10.5f} {:>+10.5f}\n",
-                   fmt::format("control volume at {:.2f} {}", r.contour.distance, unit),
-                   r.cl_momentum, r.cd_momentum, r.cl_momentum_difference);
+        fmt::print("  {:<34} {:>10.5f} {:>10.5f} {:>+13.5f}\n",
+                   control_volume_label(r.contour.distance, circle), r.cl_momentum, r.cd_momentum,
+                   r.cl_momentum_difference);
     for (const RouteComparison& r : a.routes)
-        fmt::print("  {:<34} {:>10.5f} {:>10} {:>+10.5f}\n",
-                   fmt::format("circulation at {:.2f} {}", r.contour.distance, unit),
-                   r.cl_circulation, "", r.cl_circulation_difference);
+        fmt::print("  {:<34} {:>10.5f} {:>10} {:>+13.5f}\n",
+                   circulation_label(r.contour.distance, circle), r.cl_circulation, "",
+                   r.cl_circulation_difference);
+    if (!a.routes.empty()) fmt::print("  {}\n", circulation_note);
     if (unsteady) {
         fmt::print(
             "  (this instant: the control-volume rows leave out the rate of change of the "
@@ -58,11 +58,13 @@ void print_routes(const CaseSpec& spec, const RunAnalysis& a, bool unsteady) {
 
 void print_section_lines(const RunAnalysis& a) {
     fmt::print(
-        "  Cm (quarter chord) {:.5f}; Kutta check: Cp upper {:.4f}, lower {:.4f} at the "
-        "trailing edge\n",
-        a.forces.cm.total, a.kutta.cp_upper, a.kutta.cp_lower);
+        "  Cm {:.5f} ({}); Kutta check: Cp upper {:.4f}, lower {:.4f} at the trailing edge\n",
+        a.forces.cm.total, cm_convention, a.kutta.cp_upper, a.kutta.cp_lower);
     fmt::print("  upper surface {}; lower surface {}\n", separation_text(a.separation.upper),
                separation_text(a.separation.lower));
+    if (!a.wake.empty())
+        fmt::print("  wake: downwash in deg; {}\n",
+                   downward_flux_words(WakeProfileOptions{}.half_height));
     for (const WakeProfile& w : a.wake)
         fmt::print(
             "  wake {:.2f} chords behind the TE: downwash {:+.3f} deg, downward momentum "
@@ -109,8 +111,8 @@ void print_time_means(const CaseSpec& spec, const UnsteadyFigures& u) {
         fmt::print(
             "  control volume at {:.2f} {}: mean Cl {:+.5f} (surface {:+.5f}), mean Cd "
             "{:.5f} ({:+.2f}% of the surface's)\n",
-            r.contour.distance, lengths(spec), r.cl, r.cl - s.cl_mean.value, r.cd,
-            100 * (r.cd - s.cd_mean.value) / s.cd_mean.value);
+            r.contour.distance, length_words(spec.geometry.circle), r.cl, r.cl - s.cl_mean.value,
+            r.cd, 100 * (r.cd - s.cd_mean.value) / s.cd_mean.value);
 }
 
 }  // namespace
@@ -130,11 +132,6 @@ void print_closing_table(const CaseSpec& spec, const RunAnalysis& a, const Unste
     else
         print_section_lines(a);
     if (u) print_time_means(spec, *u);
-    fmt::print(
-        "  cautions: 2D and incompressible; the {} model has its limits; check grid and time-step "
-        "convergence before relying on a figure; not a substitute for testing and licensed "
-        "engineering review of anything that flies\n",
-        spec.model.name);
 }
 
 }  // namespace veer

@@ -29,11 +29,12 @@ std::string polar_text(const std::vector<PointRecord>& points) {
     for (std::size_t c = 0; c < columns.size(); ++c) out << (c ? "," : "") << columns[c];
     out << "\n";
     for (const PointRecord& r : points) {
-        out << fmt::format("{:g},{},{},{},{},{},{},{},{},{},{},{}\n", r.alpha, cell(r.cl),
-                           cell(r.cd), cell(r.cm), cell(r.cl_momentum), cell(r.separation_upper),
-                           cell(r.reattachment_upper), cell(r.separation_lower),
-                           cell(r.reattachment_lower), r.regime, cell(r.strouhal),
-                           cell(r.cl_amplitude));
+        // cl_basis is free text without commas (sweep_record.hpp), so no quoting is needed.
+        out << fmt::format(
+            "{:g},{},{},{},{},{},{},{},{},{},{},{},{},{},{}\n", r.alpha, cell(r.cl), cell(r.cd),
+            cell(r.cm), cell(r.cl_momentum), cell(r.separation_upper), cell(r.reattachment_upper),
+            cell(r.separation_lower), cell(r.reattachment_lower), r.regime, cell(r.strouhal),
+            cell(r.cl_amplitude), r.cl_basis, cell(r.cl_steady), cell(r.contour_distance));
     }
     return out.str();
 }
@@ -89,7 +90,10 @@ const std::vector<const char*>& polar_columns() {
                                                      "reattachment_lower",
                                                      "regime",
                                                      "strouhal",
-                                                     "cl_amplitude"};
+                                                     "cl_amplitude",
+                                                     "cl_basis",
+                                                     "cl_steady",
+                                                     "contour_distance"};
     return columns;
 }
 

@@ -37,10 +37,13 @@ void ProgressLine::update(const ProgressFigures& f, bool force) {
     std::string model;
     for (const auto& [label, residual] : f.model_residuals)
         model += fmt::format(" {} {:8.2e}", label, residual);
+    const std::string eta =
+        f.forces_settling
+            ? std::string("residuals down, Cl and Cd settling")
+            : fmt::format("{:3.0f}%  left {}", 100 * f.fraction_done, format_duration(left));
     const std::string line = fmt::format(
-        "{}{}  res u {:8.2e} v {:8.2e} div {:8.2e}{}  Cl {:8.5f}  Cd {:8.5f}  {:3.0f}%  left {}",
-        m_label, when, f.residual_u, f.residual_v, f.residual_continuity, model, f.cl, f.cd,
-        100 * f.fraction_done, format_duration(left));
+        "{}{}  res u {:8.2e} v {:8.2e} continuity {:8.2e}{}  Cl {:8.5f}  Cd {:8.5f}  {}", m_label,
+        when, f.residual_u, f.residual_v, f.residual_continuity, model, f.cl, f.cd, eta);
     if (m_terminal)
         std::fprintf(stderr, "\r%s\033[K", line.c_str());
     else

@@ -17,6 +17,9 @@ struct ProgressFigures {
     bool steady = true;
     /// The model's residuals with their labels (ModelVariable::label), shown after continuity.
     std::vector<std::pair<std::string, double>> model_residuals;
+    /// Steady: every residual is down but Cl and Cd have not settled yet, so no time left can
+    /// be estimated from the residuals (the line says so instead of "100 %, left 0s").
+    bool forces_settling = false;
 };
 
 class ProgressLine {

@@ -7,6 +7,7 @@
 
 #include "app/commands.hpp"
 #include "app/mesh_pipeline.hpp"
+#include "app/reader_labels.hpp"
 #include "app/run_report.hpp"
 #include "app/section_notes.hpp"
 #include "app/simulation.hpp"
@@ -99,9 +100,9 @@ int run_run_command(const RunOptions& o) {
             header_section = std::move(mesh.section);
         }
     }
-    fmt::print("{}: {} x {} cells, Re {:g}, alpha {:g} deg, {} {}\n", spec.geometry.name, grid.ni(),
-               grid.nj(), spec.flow.reynolds, spec.flow.alpha_deg, spec.model.name,
-               mode_word(spec.run.mode));
+    fmt::print("{}: {}, Re {:g}, alpha {:g} deg, {} {}\n", spec.geometry.name,
+               grid_words(spec.mesh, spec.geometry.circle, grid.ni(), grid.nj()),
+               spec.flow.reynolds, spec.flow.alpha_deg, spec.model.name, mode_word(spec.run.mode));
     if (header_section) print_section_notes(*header_section, 15);
     SimulationOptions options;
     options.progress = !o.quiet;
@@ -124,6 +125,8 @@ int run_run_command(const RunOptions& o) {
     if (result.status != RunStatus::diverged)
         write_run_report(sim, result, ClosingTable::print, routes ? &*routes : nullptr);
     say_how_it_ended(result, sim);
+    std::fflush(stderr);
+    fmt::print("{}\n", reader_caution());  // the last line of every run that got this far
     return exit_code(result.status);
 }
 

@@ -102,9 +102,10 @@ nlohmann::json summary_json(const Simulation& sim, const RunResult& r, const Run
     const CaseSpec& spec = sim.spec();
     const SurfaceForces& f = a.forces;
     nlohmann::json cl_momentum = nlohmann::json::object(), cd_momentum = nlohmann::json::object(),
-                   cl_circulation = nlohmann::json::object();
+                   cl_circulation = nlohmann::json::object(), placed = nlohmann::json::object();
     for (std::size_t k = 0; k < a.routes.size(); ++k) {
         const std::string key = fmt::format("{:g}", spec.post.contours[k]);
+        placed[key] = a.routes[k].contour.distance;  // where the grid put the contour asked for
         cl_momentum[key] = a.routes[k].cl_momentum;
         cd_momentum[key] = a.routes[k].cd_momentum;
         cl_circulation[key] = a.routes[k].cl_circulation;
@@ -128,6 +129,7 @@ nlohmann::json summary_json(const Simulation& sim, const RunResult& r, const Run
         {"cl_momentum", cl_momentum},
         {"cd_momentum", cd_momentum},
         {"cl_circulation", cl_circulation},
+        {"contour_distances", placed},
         {"max_lift_disagreement", a.max_lift_disagreement},
         {"stagnation_x", a.separation.stagnation.x},
         {"separation_upper", location_or_null(first(a.separation.upper.separations))},

@@ -260,7 +260,7 @@ RunResult Simulation::run() {
         progress.update({r.step, r.time, r.residual_u, r.residual_v, r.residual_continuity,
                          res.forces.cl.total, res.forces.cd.total,
                          std::clamp(std::max(by_steps, by_goal), 0.0, 1.0), steady,
-                         labelled_model_residuals(r)});
+                         labelled_model_residuals(r), steady && by_goal >= 1.0 && !converged});
         if (m_spec.run.output_every > 0 && r.step % m_spec.run.output_every == 0)
             series.write_frame(frame_time(), m_grid, m_metrics, m_solver->fields());
         if (r.step % m_spec.run.checkpoint_every == 0) write_checkpoint_now();

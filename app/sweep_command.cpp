@@ -10,6 +10,7 @@
 #include "app/mesh_pipeline.hpp"
 #include "app/polar_table.hpp"
 #include "app/progress_line.hpp"
+#include "app/reader_labels.hpp"
 #include "app/section_notes.hpp"
 #include "app/sweep_angles.hpp"
 #include "app/sweep_plan.hpp"
@@ -43,10 +44,17 @@ std::vector<std::size_t> points_to_run(const SweepOptions& o, std::size_t count,
 }
 
 void say_point(const PointRecord& r, std::size_t k, std::size_t count, bool reused) {
+    const std::string steady =
+        r.cl_steady ? fmt::format("; converged steady Cl {:.5f}", *r.cl_steady) : std::string();
+    const std::string contour = r.cl_momentum && r.contour_distance
+                                    ? fmt::format("; Cl {:.5f} by the {}", *r.cl_momentum,
+                                                  control_volume_label(*r.contour_distance, false))
+                                    : std::string();
     fmt::print(
-        "point {}/{} alpha {:+.2f}: {}{}, Cl {:.5f} Cd {:.5f} Cm {:.5f}{} ({} "
+        "point {}/{} alpha {:+.2f} deg: {}{}, surface Cl {:.5f} Cd {:.5f} Cm {:.5f} ({}{}){}{} ({} "
         "iterations, {:.1f} s)\n",
         k + 1, count, r.alpha, r.regime, reused ? " (done earlier)" : "", r.cl, r.cd, r.cm,
+        r.cl_basis, steady, contour,
         r.strouhal ? fmt::format(", St {:.4f}", *r.strouhal) : std::string(), r.iterations,
         r.wall_seconds);
     std::fflush(stdout);
@@ -152,8 +160,9 @@ int run_sweep(const SweepOptions& o, const SweepRanks& ranks) {
     MeshBuild mesh = build_mesh(base);
     if (ranks.is_root()) {
         for (const std::string& w : mesh.quality.warnings) fmt::print("mesh warning: {}\n", w);
-        fmt::print("{}: {} x {} cells, Re {:g}, {} points on {} process{}\n", base.geometry.name,
-                   mesh.grid.ni(), mesh.grid.nj(), base.flow.reynolds, angles.size(), ranks.size(),
+        fmt::print("{}: {}, Re {:g}, {}, {} points on {} process{}\n", base.geometry.name,
+                   grid_words(mesh.spec, base.geometry.circle, mesh.grid.ni(), mesh.grid.nj()),
+                   base.flow.reynolds, base.model.name, angles.size(), ranks.size(),
                    ranks.size() > 1 ? "es" : "");
         if (!base.geometry.circle) {  // a circle has no chord line or trailing edge to place
             print_section_notes(mesh.section, 15);
@@ -184,16 +193,25 @@ int run_sweep(const SweepOptions& o, const SweepRanks& ranks) {
 
 int run_sweep_command(const SweepOptions& o) {
     SweepRanks ranks;
-    if (ranks.size() == 1) return run_sweep(o, ranks);
-    // One rank's bad input must not leave the others waiting at a barrier.
-    try {
-        return run_sweep(o, ranks);
-    } catch (const std::exception& e) {
-        fmt::print(stderr, "veer: error on rank {}: {}\n", ranks.rank(), e.what());
-        std::fflush(stderr);
-        ranks.abort(2);
-        return 2;
+    int code = 0;
+    if (ranks.size() == 1) {
+        code = run_sweep(o, ranks);
+    } else {
+        // One rank's bad input must not leave the others waiting at a barrier.
+        try {
+            code = run_sweep(o, ranks);
+        } catch (const std::exception& e) {
+            fmt::print(stderr, "veer: error on rank {}: {}\n", ranks.rank(), e.what());
+            std::fflush(stderr);
+            ranks.abort(2);
+            return 2;
+        }
     }
+    if (ranks.is_root()) {  // the last line of every sweep that ran
+        std::fflush(stderr);
+        fmt::print("{}\n", reader_caution());
+    }
+    return code;
 }
 
 }  // namespace veer

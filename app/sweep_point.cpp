@@ -53,8 +53,23 @@ std::optional<double> momentum_lift(const RunAnalysis& a, const std::vector<doub
     return best;
 }
 
+/// The distance of the largest contour as the grid places it.
+std::optional<double> largest_contour_distance(const RunAnalysis& a,
+                                               const std::vector<double>& distances) {
+    std::optional<double> placed;
+    double largest = -1.0;
+    for (std::size_t k = 0; k < a.routes.size() && k < distances.size(); ++k)
+        if (distances[k] > largest) {
+            largest = distances[k];
+            placed = a.routes[k].contour.distance;
+        }
+    return placed;
+}
+
 /// Time means, amplitudes and Strouhal number of a time-accurate run into the record.
 void take_cycle_statistics(PointRecord& r, const UnsteadyStats& st) {
+    r.cl_basis = st.periodic ? fmt::format("mean over {} whole cycles", st.cycles)
+                             : std::string("mean over the second half of the record");
     r.cl = st.cl_mean;
     r.cd = st.cd_mean;
     r.cm = st.cm_mean;
@@ -138,6 +153,10 @@ void run_time_accurate(PointRecord& r, PointOutcome& out, const SweepCase& sweep
         return watch->add(step.time, f.cl.total, f.cd.total);
     };
     const std::string what = from.check_time > 0 ? "check " : "unsteady ";
+    if (sweep.progress && from.check_time > 0)
+        fmt::print(
+            "\n  a disturbed time-accurate check of the steady solution follows; its table is of "
+            "the check's last instant, not the point's result\n");
     RunPiece p = run_piece(spec, grid, dir / "unsteady", &from.fields, sweep, label + what, hook,
                            running.get());
     r.iterations += p.result.steps;
@@ -158,6 +177,7 @@ void run_time_accurate(PointRecord& r, PointOutcome& out, const SweepCase& sweep
             : std::string();
     if (watch->outcome() == TimeAccurateWatch::Outcome::kept) {
         r.note = "steady solution kept by " + check;
+        r.cl_basis = "converged steady; kept by a time-accurate check";
         return;
     }
     if (p.result.status == RunStatus::diverged && from.check_time > 0 && !watch->judged()) {
@@ -168,6 +188,7 @@ void run_time_accurate(PointRecord& r, PointOutcome& out, const SweepCase& sweep
         return;
     }
     if (!check.empty()) r.note = "the steady solution is not kept (" + check + ")";
+    if (from.check_time > 0) r.cl_steady = from.cl_steady;  // shown beside the later result
     r.status = status_word(p.result.status);
     if (p.result.status == RunStatus::diverged) {
         r.regime = "failed";
@@ -176,6 +197,7 @@ void run_time_accurate(PointRecord& r, PointOutcome& out, const SweepCase& sweep
     }
     r.final_run = "unsteady";
     r.regime = "unsteady";
+    r.cl_basis = "final instant of the time-accurate run";
     if (watch->outcome() == TimeAccurateWatch::Outcome::settled) {
         // Settled without shedding: the final instant is the steady flow.
         r.status = "settled";
@@ -184,6 +206,7 @@ void run_time_accurate(PointRecord& r, PointOutcome& out, const SweepCase& sweep
             "; the time-accurate run settled (Cl and Cd within 1e-4 over 2 time units) at t = "
             "{:.2f}",
             p.result.time);
+        r.cl_basis = "settled time-accurate";
         r.cl = p.result.forces.cl.total;
         r.cd = p.result.forces.cd.total;
         r.cm = p.result.forces.cm.total;
@@ -249,6 +272,7 @@ PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const CaseSpe
         };
     }
     RunPiece p = run_piece(spec, grid, dir, start, sweep, label, stall_hook);
+    if (p.analysis) r.contour_distance = largest_contour_distance(*p.analysis, spec.post.contours);
     const bool stalled = plateau && plateau->stalled() && p.result.status == RunStatus::step_cap;
     r.iterations = p.result.steps;
     r.wall_seconds = p.result.wall_seconds;
@@ -280,6 +304,7 @@ PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const CaseSpe
             }
             [[fallthrough]];
         default:
+            if (p.result.status == RunStatus::step_cap) r.cl_basis = "not converged";
             r.cl = p.result.forces.cl.total;
             r.cd = p.result.forces.cd.total;
             r.cm = p.result.forces.cm.total;

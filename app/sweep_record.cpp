@@ -35,7 +35,10 @@ nlohmann::json record_to_json(const PointRecord& r) {
         {"cl", r.cl},
         {"cd", r.cd},
         {"cm", r.cm},
+        {"cl_basis", r.cl_basis},
+        {"cl_steady", optional_value(r.cl_steady)},
         {"cl_momentum", optional_value(r.cl_momentum)},
+        {"contour_distance", optional_value(r.contour_distance)},
         {"separation_upper", optional_value(r.separation_upper)},
         {"reattachment_upper", optional_value(r.reattachment_upper)},
         {"separation_lower", optional_value(r.separation_lower)},
@@ -70,6 +73,10 @@ PointRecord record_from_json(const nlohmann::json& j, const std::string& source)
         r.cd = number("cd");
         r.cm = number("cm");
         r.cl_momentum = read_optional(j, "cl_momentum");
+        // Records written before these keys existed: the basis is not known.
+        r.cl_basis = j.value("cl_basis", std::string("not recorded"));
+        r.cl_steady = read_optional(j, "cl_steady");
+        r.contour_distance = read_optional(j, "contour_distance");
         r.separation_upper = read_optional(j, "separation_upper");
         r.reattachment_upper = read_optional(j, "reattachment_upper");
         r.separation_lower = read_optional(j, "separation_lower");

@@ -15,11 +15,19 @@ struct PointRecord {
     double alpha = 0.0;           ///< degrees
     std::string folder;           ///< relative to the sweep folder, e.g. "alpha_+04.00"
     std::string final_run = ".";  ///< the run whose outputs describe the point, relative to folder
-    std::string regime = "steady";  ///< "steady", "unsteady" or "failed"
-    std::string status;             ///< how the final run ended (converged, end time, ...)
-    std::string note;               ///< why the point went time-accurate, or failed
-    double cl = 0.0, cd = 0.0, cm = 0.0;
-    std::optional<double> cl_momentum;  ///< control-volume lift on the largest contour
+    std::string regime = "steady";        ///< "steady", "unsteady" or "failed"
+    std::string status;                   ///< how the final run ended (converged, end time, ...)
+    std::string note;                     ///< why the point went time-accurate, or failed
+    double cl = 0.0, cd = 0.0, cm = 0.0;  ///< surface route (pressure + friction)
+    /// What cl, cd and cm are: "converged steady" (with "; kept by a time-accurate check"),
+    /// "settled time-accurate", "mean over N whole cycles", "mean over the second half of the
+    /// record", "final instant of the time-accurate run" or "not converged". Never a comma:
+    /// polar.csv writes it unquoted.
+    std::string cl_basis = "converged steady";
+    /// The converged steady Cl when the point's result is a later time-accurate one.
+    std::optional<double> cl_steady;
+    std::optional<double> cl_momentum;       ///< control-volume lift on the largest contour
+    std::optional<double> contour_distance;  ///< that contour's distance as the grid places it
     std::optional<double> separation_upper, reattachment_upper;  ///< x/c, first ones from the LE
     std::optional<double> separation_lower, reattachment_lower;
     /// Upper surface: where the flow leaves the wall for good (no reattachment aft), x/c.
