@@ -3,6 +3,7 @@
 
 #include "app/commands.hpp"
 #include "app/mesh_pipeline.hpp"
+#include "app/reader_labels.hpp"
 #include "app/section_notes.hpp"
 #include "app/simulation.hpp"
 #include "io/case_choices.hpp"
@@ -24,19 +25,15 @@ int run_check_command(const CaseOptions& options) {
                mesh.section.points.size());
     if (c.geometry.circle)
         fmt::print(
-            "  grid           O-grid of {} x {} cells (around {}, normal {}), far field {} "
-            "diameters, first cell {:.3g} diameters; lengths, Re and coefficients on the "
-            "diameter\n",
-            mesh.grid.ni(), mesh.grid.nj(), mesh.spec.around, mesh.spec.normal, mesh.spec.far_field,
+            "  grid           {}, far field {} diameters, first cell {:.3g} diameters; lengths, "
+            "Re and coefficients on the diameter\n",
+            grid_words(mesh.spec, true, mesh.grid.ni(), mesh.grid.nj()), mesh.spec.far_field,
             mesh.spec.first_cell);
     else {
         print_section_notes(mesh.section, 15);
-        fmt::print(
-            "  grid           {} x {} cells (around {}, wake {} each side, normal {}), far field "
-            "{} "
-            "chords, first cell {:.3g} chords\n",
-            mesh.grid.ni(), mesh.grid.nj(), mesh.spec.around, mesh.spec.wake, mesh.spec.normal,
-            mesh.spec.far_field, mesh.spec.first_cell);
+        fmt::print("  grid           {}, far field {} chords, first cell {:.3g} chords\n",
+                   grid_words(mesh.spec, false, mesh.grid.ni(), mesh.grid.nj()),
+                   mesh.spec.far_field, mesh.spec.first_cell);
     }
     fmt::print("  flow           Re {:g}, alpha {:g} deg, {}\n", c.flow.reynolds, c.flow.alpha_deg,
                c.model.name);

@@ -6,6 +6,7 @@
 
 #include "app/commands.hpp"
 #include "app/mesh_pipeline.hpp"
+#include "app/reader_labels.hpp"
 #include "app/section_notes.hpp"
 #include "io/case_file.hpp"
 #include "io/json_writer.hpp"
@@ -71,8 +72,8 @@ void print_mesh_table(const MeshBuild& m) {
             "point)\n",
             q.ni, q.nj, q.cell_count, m.spec.around);
     else
-        fmt::print("  cells                    {} x {} = {} (around {}, wake {} each side)\n", q.ni,
-                   q.nj, q.cell_count, m.spec.around, m.spec.wake);
+        fmt::print("  cells                    {}: {} in all\n",
+                   grid_words(m.spec, false, q.ni, q.nj), q.cell_count);
     fmt::print("  smallest cell area       {:.3e} {}^2 (positive everywhere)\n", q.min_cell_area,
                unit);
     if (o)

@@ -59,9 +59,9 @@ std::string_view reader_caution() {
 
 std::string grid_words(const CGridSpec& mesh, bool circle, int ni, int nj) {
     if (circle)
-        return fmt::format("grid {} x {} (around x normal, O-grid), {} x {} cells", mesh.around,
+        return fmt::format("{} x {} (around x normal, O-grid), {} x {} cells", mesh.around,
                            mesh.normal, ni, nj);
-    return fmt::format("grid {} x {} (around x normal; wake {} cells each side), {} x {} cells",
+    return fmt::format("{} x {} (around x normal; wake {} cells each side), {} x {} cells",
                        mesh.around, mesh.normal, mesh.wake, ni, nj);
 }
 

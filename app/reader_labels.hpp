@@ -15,7 +15,7 @@ namespace veer {
 std::string_view reader_caution();
 
 /// One grid-size convention everywhere (README: a grid A×N means around A, normal N): e.g.
-/// "grid 256 x 64 (around x normal; wake 48 cells each side), 352 x 64 cells".
+/// "256 x 64 (around x normal; wake 48 cells each side), 352 x 64 cells".
 std::string grid_words(const CGridSpec& mesh, bool circle, int ni, int nj);
 
 /// The reference length's name: "chords", or "diameters" for the circle.

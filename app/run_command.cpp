@@ -100,7 +100,7 @@ int run_run_command(const RunOptions& o) {
             header_section = std::move(mesh.section);
         }
     }
-    fmt::print("{}: {}, Re {:g}, alpha {:g} deg, {} {}\n", spec.geometry.name,
+    fmt::print("{}: grid {}, Re {:g}, alpha {:g} deg, {} {}\n", spec.geometry.name,
                grid_words(spec.mesh, spec.geometry.circle, grid.ni(), grid.nj()),
                spec.flow.reynolds, spec.flow.alpha_deg, spec.model.name, mode_word(spec.run.mode));
     if (header_section) print_section_notes(*header_section, 15);

@@ -160,7 +160,7 @@ int run_sweep(const SweepOptions& o, const SweepRanks& ranks) {
     MeshBuild mesh = build_mesh(base);
     if (ranks.is_root()) {
         for (const std::string& w : mesh.quality.warnings) fmt::print("mesh warning: {}\n", w);
-        fmt::print("{}: {}, Re {:g}, {}, {} points on {} process{}\n", base.geometry.name,
+        fmt::print("{}: grid {}, Re {:g}, {}, {} points on {} process{}\n", base.geometry.name,
                    grid_words(mesh.spec, base.geometry.circle, mesh.grid.ni(), mesh.grid.nj()),
                    base.flow.reynolds, base.model.name, angles.size(), ranks.size(),
                    ranks.size() > 1 ? "es" : "");
