@@ -13,7 +13,8 @@ padding-bottom:.2em;margin-top:2em}table{border-collapse:collapse;margin:.8em 0;
 th,td{border:1px solid #ccc;padding:.25em .6em;text-align:right}th{background:#f2f2f2}
 td:first-child,th:first-child{text-align:left}caption{text-align:left;font-weight:bold;
 padding:.3em 0}figure{display:inline-block;margin:.5em 1em .5em 0;vertical-align:top}
-figure img{max-width:100%;border:1px solid #ddd}figcaption{font-size:.85em;color:#555})";
+figure img{max-width:100%;border:1px solid #ddd}figcaption{font-size:.85em;color:#555}
+.caution{border:2px solid #b35900;background:#fff4e5;padding:.6em .9em;font-weight:bold})";
 
 void write_table(std::ostringstream& out, const ReportTable& t) {
     out << "<table>\n";
@@ -36,6 +37,8 @@ std::string render_report_html(const ReportPage& page) {
         << markup_escaped(page.title) << "</title>\n<style>" << style
         << "</style>\n</head>\n<body>\n"
         << "<h1>" << markup_escaped(page.title) << "</h1>\n";
+    if (!page.caution.empty())
+        out << "<p class=\"caution\">" << markup_escaped(page.caution) << "</p>\n";
     for (const ReportSection& s : page.sections) {
         out << "<h2>" << markup_escaped(s.heading) << "</h2>\n";
         for (const std::string& p : s.paragraphs) out << "<p>" << markup_escaped(p) << "</p>\n";

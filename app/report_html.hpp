@@ -24,6 +24,7 @@ struct ReportSection {
 struct ReportPage {
     std::string title;
     std::vector<ReportSection> sections;
+    std::string caution;  ///< shown boxed under the title, before anything else (plain text)
 };
 
 /// The page as HTML text.

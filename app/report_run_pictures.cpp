@@ -48,6 +48,7 @@ void draw_convergence(const fs::path& history, const fs::path& file, const std::
     Chart c;
     c.title = title + ": residuals";
     c.x_label = steady ? "iteration" : "time (chords / U)";
+    c.x_from_zero = true;
     c.y_label = "RMS residual";
     c.y_scale = AxisScale::logarithmic;
     c.series = {{"u momentum", x, t.numbers("residual_u"), true, false, false, 0},
@@ -70,6 +71,7 @@ void draw_lift_history(const fs::path& history, const fs::path& file, const std:
     Chart c;
     c.title = title + ": forces";
     c.x_label = steady ? "iteration" : "time (chords / U)";
+    c.x_from_zero = true;
     c.y_label = "coefficient";
     c.series = {{"Cl", x, t.numbers("cl"), true, false, false, 0},
                 {"Cd", x, t.numbers("cd"), true, false, false, 1},

@@ -5,6 +5,7 @@
 #include <algorithm>
 #include <cmath>
 
+#include "app/reader_labels.hpp"
 #include "app/report_csv.hpp"
 #include "app/report_pictures.hpp"
 #include "io/plot_chart.hpp"
@@ -19,19 +20,23 @@ std::vector<ChartMark> polar_marks(const PolarFigures& f) {
     if (f.alpha_separation_onset)
         marks.push_back({*f.alpha_separation_onset,
                          fmt::format("separation onset {:g}°", *f.alpha_separation_onset)});
-    // Cl max is marked as the stall angle only when Cl falls again beyond it.
+    // Cl max is marked as the stall angle only when Cl falls again beyond it; otherwise the
+    // largest Cl is only the end of the range swept.
     if (f.alpha_cl_max)
         marks.push_back(
-            {*f.alpha_cl_max, fmt::format("{} {:g}°", f.stall_in_range ? "stall, Cl max" : "Cl max",
-                                          *f.alpha_cl_max)});
+            {*f.alpha_cl_max,
+             f.stall_in_range
+                 ? fmt::format("stall, Cl max {:g}°", *f.alpha_cl_max)
+                 : fmt::format("largest Cl swept {:g}° (no stall in range)", *f.alpha_cl_max)});
     return marks;
 }
 
 /// Steady points joined by a line, unsteady (time-averaged) ones as markers on their own.
 std::vector<ChartSeries> regime_series(const std::vector<PointRecord>& p, double PointRecord::*x,
-                                       double PointRecord::*y) {
-    ChartSeries steady{"steady", {}, {}, true, true, false, 0};
-    ChartSeries unsteady{"unsteady (time mean)", {}, {}, false, true, false, 1};
+                                       double PointRecord::*y, const std::string& quantity) {
+    ChartSeries steady{quantity + ", surface: steady points", {}, {}, true, true, false, 0};
+    ChartSeries unsteady{
+        quantity + ", surface: time mean of unsteady points", {}, {}, false, true, false, 1};
     for (const PointRecord& r : p) {
         ChartSeries& s = r.regime == "unsteady" ? unsteady : steady;
         s.x.push_back(r.*x), s.y.push_back(r.*y);
@@ -48,12 +53,15 @@ void draw_polar(const std::vector<PointRecord>& p, const PolarFigures& f, const 
     c.title = y_label + " against " + x_label;
     c.x_label = x_label;
     c.y_label = y_label;
-    c.series = regime_series(p, x, y);
+    c.series = regime_series(p, x, y, y_label);
     if (marks) c.marks = polar_marks(f);
     if (y == &PointRecord::cl && x == &PointRecord::alpha) {
         ChartSeries momentum{"Cl, control volume", {}, {}, false, true, false, 2};
-        for (const PointRecord& r : p)
+        for (const PointRecord& r : p) {
             if (r.cl_momentum) momentum.x.push_back(r.alpha), momentum.y.push_back(*r.cl_momentum);
+            if (r.contour_distance)
+                momentum.label = "Cl, " + control_volume_label(*r.contour_distance, false);
+        }
         if (!momentum.x.empty()) c.series.push_back(momentum);
         if (f.linear) {
             const double a0 = f.linear->alpha_min, a1 = f.linear->alpha_max;
@@ -131,8 +139,8 @@ PictureSet draw_sweep_pictures(const fs::path& sweep_dir, const std::vector<Poin
     });
     add("polar_cm_alpha.png", "Quarter-chord moment against angle of attack",
         [&](const fs::path& file) {
-            draw_polar(p, f, file, &PointRecord::alpha, &PointRecord::cm, "alpha (deg)", "Cm",
-                       true);
+            draw_polar(p, f, file, &PointRecord::alpha, &PointRecord::cm, "alpha (deg)",
+                       "Cm (quarter chord, nose-up +)", true);
         });
     add("sweep_cp.png", "Cp at each angle (final fields of each point)",
         [&](const fs::path& file) { draw_all_surfaces(sweep_dir, p, file, true); });

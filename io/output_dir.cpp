@@ -40,4 +40,10 @@ void prepare_output_dir(const fs::path& dir, const std::string& case_text, bool 
     if (!out) throw InputError((dir / stamp_name).string() + ": cannot write into the folder");
 }
 
+std::optional<std::string> stamped_case_text(const fs::path& dir) {
+    std::error_code ec;
+    if (!fs::exists(dir / stamp_name, ec)) return std::nullopt;
+    return read_all(dir / stamp_name);
+}
+
 }  // namespace veer

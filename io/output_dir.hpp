@@ -1,6 +1,7 @@
 #pragma once
 /// The run or mesh output folder: created if missing, never silently reused for another study.
 #include <filesystem>
+#include <optional>
 #include <string>
 
 namespace veer {
@@ -10,5 +11,8 @@ namespace veer {
 /// holds the same case text) is reused; any other non-empty folder is refused with an InputError
 /// unless `force` is set. Writes the stamp file.
 void prepare_output_dir(const std::filesystem::path& dir, const std::string& case_text, bool force);
+
+/// The case text stamped in a folder by prepare_output_dir; nullopt when it has none.
+std::optional<std::string> stamped_case_text(const std::filesystem::path& dir);
 
 }  // namespace veer

@@ -65,6 +65,7 @@ Frame make_frame(const Chart& c, int width, int height) {
     if (!c.equal_aspect) {
         pad(x0, x1);
         if (!f.log_y) pad(y0, y1);
+        if (c.x_from_zero && x0 < 0.0) x0 = 0.0;  // no iteration -100 on a history axis
     }
     f.x = nice_ticks(x0, x1);
     f.y = f.log_y ? decade_ticks(y0, y1) : nice_ticks(y0, y1);

@@ -36,6 +36,7 @@ struct Chart {
     AxisScale y_scale = AxisScale::linear;
     bool y_reversed = false;    ///< e.g. Cp, negative upwards
     bool equal_aspect = false;  ///< one unit on x as long as one on y (section outlines)
+    bool x_from_zero = false;   ///< x is a count or a time: the axis never starts below 0
 };
 
 /// Draws `chart` into `path` (.png or .svg), `width` x `height` pixels. Throws InputError naming

@@ -105,7 +105,7 @@ TEST(SectionNotes, ReportPageShowsThePlacement) {
     const std::string html = test::read_text(tmp / "report.html");
     expect_contains(html, "Section: how the coordinates were read and placed");
     expect_contains(html, "the file's own x axis");
-    expect_contains(html, "trailing_edge_closure");
+    expect_contains(html, "trailing-edge closure");  // a label, not the JSON key
 }
 
 }  // namespace
