@@ -41,7 +41,9 @@
 /// Ladson's data ask anyway).
 ///
 /// How the model's stall compares with the experiment: Ladson's Cl rises to about 1.61-1.63 at
-/// 17 deg and drops abruptly to about 1.0 at 18 deg (all three grits). The steady model on the
+/// 17 deg and drops abruptly just past 18 deg: to 0.9967 at 18.02 deg (80 grit), 1.1886 at
+/// 18.18 deg (120 grit) and 1.0104 at 18.21 deg (180 grit) (Ladson 1988, NASA TM-4074, in
+/// tests/reference/ladson1988_naca0012.csv). The steady model on the
 /// 384 x 128 grid reaches 1.608 at 18 deg (x 1.0114 = 1.626, within the measured maximum) and
 /// drops to 1.061 at 20 deg (each point from the free stream): about the measured Cl max and
 /// post-stall level, one to three degrees later. On this grid it peaks lower (1.446 at 18 deg,

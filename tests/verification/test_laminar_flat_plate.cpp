@@ -95,7 +95,8 @@ std::vector<double> middle_ratios(const PlateRun& r, const char* label) {
 TEST(LaminarFlatPlate, SkinFrictionFollowsBlasiusOverTheMiddleOfThePlate) {
     // 24 + 96 cells along, 64 across a domain one plate length high; first cell 1e-4, so the
     // first centroid sits at eta = y sqrt(Re / x) = 0.03 to 0.07 over the checked stretch and the
-    // boundary layer (delta_99 = 5 x / sqrt(Re_x), 0.008 at x = 0.25) holds about 20 cells.
+    // boundary layer (delta_99 = 5 x / sqrt(Re_x), the Blasius thickness rounded: common practice;
+    // 0.008 at x = 0.25) holds about 20 cells.
     test::PlateGridSpec spec;
     spec.first_cell = 1e-4;
     const PlateRun r = run_plate(test::flat_plate_grid(spec));

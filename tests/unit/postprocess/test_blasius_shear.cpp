@@ -57,7 +57,7 @@ private:
 
 /// A flat plate from x = 0.1 to 1 at Re = 1e4 carrying the Blasius profile: 45 cells along, 20
 /// normal with the first cell 2e-3 high (eta of the first centroid about 0.1 at x = 1, a usual
-/// laminar wall spacing).
+/// laminar wall spacing: common practice).
 struct BlasiusPlate {
     static constexpr int ni = 45, nj = 20;
     static constexpr double re = 1e4, x0 = 0.1;
