@@ -56,9 +56,11 @@ void add_route_rows(ReportTable& t, const nlohmann::json& s, const char* key, co
     for (const auto& [asked, v] : s[key].items()) {
         const auto& placed =
             s.contains("contour_distances") ? s["contour_distances"] : nlohmann::json::object();
-        const double d = placed.contains(asked) ? placed[asked].get<double>() : std::stod(asked);
-        const std::string route =
+        const bool known = placed.contains(asked);  // older summaries keep only the asked one
+        const double d = known ? placed[asked].get<double>() : std::stod(asked);
+        std::string route =
             circulation ? circulation_label(d, circle) : control_volume_label(d, circle);
+        if (!known) route += " (asked; placed distance not recorded)";
         t.rows.push_back({fmt::format("{}, {}", what, route), reader_value(v)});
     }
 }
