@@ -9,7 +9,7 @@ namespace veer {
 namespace {
 
 /// summary.json keys (a run's and a sweep's) and what a reader is shown for them.
-constexpr std::array<std::pair<std::string_view, FigureLabel>, 37> labels = {{
+constexpr std::array<std::pair<std::string_view, FigureLabel>, 41> labels = {{
     {"section", {"section", ""}},
     {"reynolds", {"Reynolds number (on the chord)", ""}},
     {"alpha", {"angle of attack", "deg"}},
@@ -47,6 +47,10 @@ constexpr std::array<std::pair<std::string_view, FigureLabel>, 37> labels = {{
     {"failed_points", {"failed points", ""}},
     {"wall_seconds_points", {"wall time of the points", "s"}},
     {"far_field_circulation", {"far-field vortex strength (circulation)", "U c"}},
+    {"base_cp", {"base Cp (rear point)", ""}},
+    {"separation_angle_upper_deg", {"separation, upper half, from the rear point", "deg"}},
+    {"separation_angle_lower_deg", {"separation, lower half, from the rear point", "deg"}},
+    {"recirculation_length", {"recirculation length behind the rear point", "diameters"}},
 }};
 
 }  // namespace

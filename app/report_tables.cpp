@@ -104,13 +104,21 @@ ReportTable run_results_table(const nlohmann::json& s) {
     ReportTable t{"Results (from summary.json)", {{"figure", "value"}}};
     add_labelled_rows(t, s,
                       {"mode", "status", "iterations", "wall_seconds", "cl", "cl_pressure",
-                       "cl_friction", "cd", "cd_pressure", "cd_friction", "cm"});
+                       "cl_friction", "cd", "cd_pressure", "cd_friction"});
+    const bool circle = s.value("reference_length", std::string("chord")) == "diameter";
+    if (s.contains("cm"))
+        t.rows.push_back(
+            {circle ? "Cm, about the centre, clockwise positive (a section's nose-up sense)"
+                    : "Cm, about the quarter chord, nose-up positive",
+             reader_value(s["cm"])});
     add_route_rows(t, s, "cl_momentum", "Cl", false);
     add_route_rows(t, s, "cd_momentum", "Cd", false);
     add_route_rows(t, s, "cl_circulation", "Cl", true);
-    add_labelled_rows(t, s,
-                      {"max_lift_disagreement", "stagnation_x", "separation_upper",
-                       "reattachment_upper", "separation_lower", "reattachment_lower"});
+    add_labelled_rows(
+        t, s,
+        {"max_lift_disagreement", "stagnation_x", "separation_upper", "reattachment_upper",
+         "separation_lower", "reattachment_lower", "base_cp", "separation_angle_upper_deg",
+         "separation_angle_lower_deg", "recirculation_length"});
     if (s.contains("time_average") && s["time_average"].is_object()) {
         const nlohmann::json& a = s["time_average"];
         const std::string over =

@@ -15,18 +15,13 @@
 
 #include "app/commands.hpp"
 #include "io/case_file.hpp"
+#include "shipped_cases.hpp"
 
 namespace veer {
 namespace {
 namespace fs = std::filesystem;
 
-std::vector<fs::path> shipped_cases() {
-    std::vector<fs::path> cases;
-    for (const auto& entry : fs::directory_iterator(fs::path(VEER_SOURCE_DIR) / "cases"))
-        if (entry.path().extension() == ".toml") cases.push_back(entry.path());
-    std::sort(cases.begin(), cases.end());
-    return cases;
-}
+using test::shipped_cases;
 
 std::string text_of(const fs::path& p) {
     std::ifstream in(p);

@@ -62,10 +62,7 @@ TEST(ReportInBrowser, ShortSweepPageRendersWithPicturesAndCaution) {
         GTEST_SKIP() << "chromium is not installed: the report page was not rendered in a "
                         "browser (bash .ci/setup installs it)";
     test::AppScratch tmp;
-    test::write_text(tmp / "c.toml",
-                     "[geometry]\nnaca = \"0012\"\n[mesh]\naround = 64\nnormal = 24\nwake = 12\n"
-                     "far_field = 10\nfirst_cell = 5e-3\n[flow]\nreynolds = 200\n"
-                     "model = \"laminar\"\n[run]\nsteps = 400\n");
+    test::write_text(tmp / "c.toml", test::quick_case_text());
     SweepOptions sweep;
     sweep.input.case_file = tmp / "c.toml";
     sweep.alpha = "0:2:2";

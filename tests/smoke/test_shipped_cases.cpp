@@ -16,18 +16,13 @@
 #include "app/report_csv.hpp"
 #include "io/case_file.hpp"
 #include "io/json_writer.hpp"
+#include "shipped_cases.hpp"
 
 namespace veer {
 namespace {
 namespace fs = std::filesystem;
 
-std::vector<fs::path> shipped_cases() {
-    std::vector<fs::path> cases;
-    for (const auto& entry : fs::directory_iterator(fs::path(VEER_SOURCE_DIR) / "cases"))
-        if (entry.path().extension() == ".toml") cases.push_back(entry.path());
-    std::sort(cases.begin(), cases.end());
-    return cases;
-}
+using test::shipped_cases;
 
 TEST(ShippedCases, EachChecksMeshesAndRunsAFewSteps) {
     const std::vector<fs::path> cases = shipped_cases();

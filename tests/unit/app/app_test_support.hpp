@@ -58,4 +58,12 @@ inline std::string tiny_case_text() {
            "model = \"laminar\"\n[run]\nmode = \"steady\"\nsteps = 5\n";
 }
 
+/// A small case that converges in a few hundred steady iterations (a second or so): for tests
+/// that run `veer run` or `veer sweep` end to end and read what they print or write.
+inline std::string quick_case_text() {
+    return "[geometry]\nnaca = \"0012\"\n[mesh]\naround = 64\nnormal = 24\nwake = 12\n"
+           "far_field = 10\nfirst_cell = 5e-3\n[flow]\nreynolds = 200\nalpha = 0\n"
+           "model = \"laminar\"\n[run]\nsteps = 400\n";
+}
+
 }  // namespace veer::test

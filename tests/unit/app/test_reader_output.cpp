@@ -79,18 +79,12 @@ std::string last_line(const std::string& out) {
     return last;
 }
 
-/// A small quick case (converges in a few hundred iterations on this grid).
-std::string quick_case() {
-    return "[geometry]\nnaca = \"0012\"\n[mesh]\naround = 64\nnormal = 24\nwake = 12\n"
-           "far_field = 10\nfirst_cell = 5e-3\n[flow]\nreynolds = 200\nalpha = 0\n"
-           "model = \"laminar\"\n[run]\nsteps = 40\n";
-}
-
 TEST(ReaderOutput, RunEndsWithTheCaution) {
     test::AppScratch tmp;
-    test::write_text(tmp / "c.toml", quick_case());
+    test::write_text(tmp / "c.toml", test::quick_case_text());
     RunOptions o;
     o.input.case_file = tmp / "c.toml";
+    o.input.overrides = {"run.steps=40"};
     o.out_dir = tmp / "run";
     o.quiet = true;
     testing::internal::CaptureStdout();
@@ -104,7 +98,7 @@ TEST(ReaderOutput, RunEndsWithTheCaution) {
 
 /// Runs a one-point sweep of the quick case into tmp/sw; returns its stdout.
 std::string quick_sweep(const test::AppScratch& tmp) {
-    test::write_text(tmp / "c.toml", quick_case());
+    test::write_text(tmp / "c.toml", test::quick_case_text());
     SweepOptions o;
     o.input.case_file = tmp / "c.toml";
     o.alpha = "0:2:2";
