@@ -243,7 +243,20 @@ void read_flow(const toml::table* t, const std::string& source, CaseSpec& c) {
         r.fail(*t->get("alpha"), "alpha", fmt::format("{}", c.flow.alpha_deg),
                "0 with circle = true (a circle has no angle of attack: the flow runs along +x)");
     if (const auto model = r.choice("flow", "model")) c.model = model_named(*model);
-    r.reject_unknown("reynolds, alpha, model");
+    std::string known = "reynolds, alpha, model";
+    for (const ModelKey& k : c.model.keys) {
+        if (const auto v = r.number(k.name, k.lowest, k.highest, k.allowed))
+            c.model.options[k.name] = *v;
+        known += ", " + k.name;
+    }
+    r.reject_unknown(known);
+    if (c.model.check_options) {
+        try {
+            c.model.check_options(c.model.options);
+        } catch (const InputError& e) {
+            throw InputError(source + ": " + e.what());
+        }
+    }
 }
 
 void read_run(const toml::table* t, const std::string& source, CaseSpec& c) {

@@ -7,6 +7,7 @@
 /// checkpoint, the VTK frames and restarts loop over what the model declares; nothing outside
 /// the model's own files names its variables. README.md, "How to add a model", gives the steps.
 #include <functional>
+#include <map>
 #include <memory>
 #include <optional>
 #include <string>
@@ -32,6 +33,18 @@ struct ModelVariable {
     ScalarColumn column;  ///< its conditions per boundary role (boundary_table.hpp)
 };
 
+/// Numbers a case gives its model in the [flow] table, by key (the model's keys below); the case
+/// file reader fills them, `check` and `run` alike.
+using ModelOptions = std::map<std::string, double>;
+
+/// A number key of the [flow] table that a model reads (e.g. a trip position).
+struct ModelKey {
+    std::string name;     ///< the key, e.g. "trip_upper"
+    double lowest = 0.0;  ///< the accepted range, inclusive
+    double highest = 0.0;
+    std::string allowed;  ///< the range in words for messages, e.g. "a chord fraction from 0 to 1"
+};
+
 /// What a model is built from. grid and metrics are valid during construction only; geom,
 /// faces and connectivity belong to the solver and outlive the model (it may keep pointers).
 struct ModelSetup {
@@ -40,7 +53,8 @@ struct ModelSetup {
     const FaceGeometry& geom;
     const std::vector<BoundaryFace>& faces;
     const Connectivity& connectivity;
-    double nu = 0.0;  ///< molecular kinematic viscosity, 1 / Re
+    double nu = 0.0;            ///< molecular kinematic viscosity, 1 / Re
+    ModelOptions options = {};  ///< the values of the model's keys the case gave
 };
 
 /// What one model step reads: the flow after its update.
@@ -107,6 +121,13 @@ struct ModelDescriptor {
     /// The first-cell height from this y+ when the case gives neither first_cell nor y_plus
     /// (wall-resolved models); none: the mesh default.
     std::optional<double> default_y_plus;
+    /// The [flow] number keys the model reads besides the common ones (README, case files).
+    std::vector<ModelKey> keys;
+    /// Checks the values of those keys together (keys that exclude each other); throws
+    /// InputError naming them. Empty: any combination within the ranges is accepted.
+    std::function<void(const ModelOptions&)> check_options;
+    /// The values the case gave for the keys; handed to make through ModelSetup::options.
+    ModelOptions options;
     /// Builds the model for one solver.
     std::function<std::unique_ptr<FlowModel>(const ModelSetup&)> make;
 };

@@ -81,7 +81,7 @@ FlowSolverCore::FlowSolverCore(const StructuredGrid& g, const FlowConditions& c,
     pressure_solver = make_pressure_solver(s.pressure_solver);
     // The model may keep pointers to geom, faces and connectivity: members of this heap object.
     VEER_VERIFY(static_cast<bool>(s.model.make), "model '" + s.model.name + "' cannot be built");
-    model = s.model.make(ModelSetup{grid, metrics, geom, faces, connectivity, nu});
+    model = s.model.make(ModelSetup{grid, metrics, geom, faces, connectivity, nu, s.model.options});
     check_model_variables(*model);
     model->fold_wake_cut_lines(folds_wake_cut_lines());
     if (model->has_eddy_viscosity()) {

@@ -4,6 +4,7 @@
 
 #include "mesh/errors.hpp"
 #include "solver/laminar_model.hpp"
+#include "solver/sa_aft_model.hpp"
 #include "solver/spalart_allmaras_model.hpp"
 
 namespace veer {
@@ -14,6 +15,7 @@ std::deque<ModelDescriptor>& registry() {
     static std::deque<ModelDescriptor> models = {
         laminar_descriptor(),
         spalart_allmaras_descriptor(),
+        sa_aft_descriptor(),
     };
     return models;
 }

@@ -2,6 +2,7 @@
 
 #include "mesh/wall_distance.hpp"
 #include "solver/spalart_allmaras.hpp"
+#include "solver/transition_options.hpp"
 
 namespace veer {
 namespace {
@@ -14,6 +15,16 @@ public:
         : m_core(s.geom, s.faces, s.connectivity, wall_distance(s.grid, s.metrics), s.nu,
                  settings) {
         m_variables.push_back({variable_name, "nu~", m_core.boundary_column()});
+        // Trips alone: no production where a trip holds the layer laminar (the rest of the
+        // model as it is); without trips the standard model to the bit.
+        const TripPositions trips = trips_of(s.options);
+        if (trips.any()) {
+            const std::vector<TripZone> zones = trip_zones(wall_feet(s.geom, s.faces), trips);
+            m_production.resize(zones.size());
+            for (std::size_t k = 0; k < zones.size(); ++k)
+                m_production[k] = zones[k] == TripZone::laminar ? 0.0 : 1.0;
+            m_core.set_source_modifiers(&m_production, nullptr);
+        }
     }
 
     const std::vector<ModelVariable>& variables() const override { return m_variables; }
@@ -48,6 +59,7 @@ public:
 private:
     SpalartAllmaras m_core;
     std::vector<ModelVariable> m_variables;
+    std::vector<double> m_production;  ///< per cell, with trips only
 };
 
 }  // namespace
@@ -61,6 +73,7 @@ ModelDescriptor spalart_allmaras_descriptor(const SpalartAllmarasSettings& setti
     // not yet measured on y+ 1 grids).
     d.time_accurate_cfl = 0.8;
     d.default_y_plus = 1.0;  // first cell at y+ = 1 (common practice for wall-resolved SA)
+    d.keys = trip_keys();
     d.make = [settings](const ModelSetup& s) -> std::unique_ptr<FlowModel> {
         return std::make_unique<SpalartAllmarasModel>(s, settings);
     };

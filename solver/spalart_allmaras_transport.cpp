@@ -3,6 +3,7 @@
 #include <algorithm>
 
 #include "solver/loops.hpp"
+#include "solver/scalar_transport.hpp"
 #include "solver/spalart_allmaras_terms.hpp"
 #include "solver/van_leer.hpp"
 
@@ -98,36 +99,6 @@ void cell_pass(const FaceGeometry& g, const NuTildeInputs& in, const NuTildeFace
     });
 }
 
-/// Neumann faces carry no non-orthogonal diffusion (zero normal gradient).
-void clear_neumann_skew(const std::vector<BoundaryFace>& faces,
-                        const std::vector<ScalarFaceCondition>& conditions, NuTildeFaceWork& w) {
-    for (std::size_t k = 0; k < faces.size(); ++k)
-        if (!conditions[k].dirichlet) (faces[k].i_face ? w.skew_i : w.skew_j)[faces[k].face] = 0.0;
-}
-
-/// Replaces the ghost neighbour of each physical face by its condition.
-void fold_boundaries(const FaceGeometry& g, const std::vector<BoundaryFace>& faces,
-                     const std::vector<ScalarFaceCondition>& conditions, const NuTildeInputs& in,
-                     MomentumSystem& s) {
-    for (std::size_t k = 0; k < faces.size(); ++k) {
-        const BoundaryFace& b = faces[k];
-        const std::size_t c = g.cell(b.i, b.j);
-        double& slot = b.i_face ? (b.outward < 0 ? s.west[c] : s.east[c])
-                                : (b.outward < 0 ? s.south[c] : s.north[c]);
-        const double flux = (b.i_face ? *in.flux_i : *in.flux_j)[b.face];
-        const double inflow = std::max(-b.outward * flux, 0.0);
-        if (conditions[k].dirichlet) {
-            // ghost = 2 q_b - q_P in diffusion; the inflowing value is q_b itself.
-            const double dg = slot - inflow;
-            s.diag[c] += dg;
-            s.rhs_u[c] += (2.0 * dg + inflow) * conditions[k].value;
-        } else {
-            s.diag[c] -= slot;  // ghost = q_P: nothing crosses the face
-        }
-        slot = 0.0;
-    }
-}
-
 }  // namespace
 
 void NuTildeFaceWork::resize(const FaceGeometry& g) {
@@ -139,9 +110,9 @@ void assemble_nu_tilde(const FaceGeometry& g, const std::vector<BoundaryFace>& f
                        const std::vector<ScalarFaceCondition>& conditions, const NuTildeInputs& in,
                        NuTildeFaceWork& work, MomentumSystem& sys) {
     face_pass(g, in, work);
-    clear_neumann_skew(faces, conditions, work);
+    clear_neumann_skew(faces, conditions, work.skew_i, work.skew_j);
     cell_pass(g, in, work, sys);
-    fold_boundaries(g, faces, conditions, in, sys);
+    fold_scalar_boundaries(g, faces, conditions, *in.flux_i, *in.flux_j, sys);
 }
 
 }  // namespace veer

@@ -106,9 +106,9 @@ TEST(ChoiceKeys, CheckAndRunAgreeOnEveryWordOfEveryChoiceKey) {
             accepted_words += v.check && v.run;
         }
     }
-    // open/closed, three chord lines, two models, two modes, three pressure solvers, two
+    // open/closed, three chord lines, three models, two modes, three pressure solvers, two
     // steady schemes
-    EXPECT_EQ(accepted_words, 2 + 3 + 2 + 2 + 3 + 2);
+    EXPECT_EQ(accepted_words, 2 + 3 + 3 + 2 + 3 + 2);
 }
 
 TEST(ChoiceKeys, CheckAppliesTheRulesRunApplies) {
@@ -127,6 +127,13 @@ TEST(ChoiceKeys, CheckAppliesTheRulesRunApplies) {
         {{"post.wake_stations=[50.0]"}, false},
         {{"post.wake_stations=[2.0]"}, true},
         {{"post.contours=[50.0]"}, false},
+        // The transition keys (forced trips with any model of the Spalart-Allmaras family; the
+        // critical amplification factor or the turbulence intensity, not both).
+        {{"flow.model=\"spalart-allmaras\"", "flow.trip_upper=0.1"}, true},
+        {{"flow.model=\"sa-aft\"", "flow.trip_lower=1.2"}, false},
+        {{"flow.model=\"sa-aft\"", "flow.turbulence_percent=0.1", "flow.critical_amplification=9"},
+         false},
+        {{"flow.trip_upper=0.1"}, false},  // the tiny case's laminar model has no trips
     };
     for (const auto& [overrides, ok] : cases) {
         const Verdicts v = both_paths(scratch, overrides, runs);

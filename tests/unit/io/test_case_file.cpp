@@ -267,3 +267,49 @@ TEST(CaseFile, StartSpinOnlyForAnUnsteadyCircle) {
 
 }  // namespace
 }  // namespace veer
+
+namespace veer {
+namespace {
+
+std::string transition_case(const std::string& model, const std::string& keys) {
+    return "[geometry]\nnaca = \"0012\"\n[flow]\nreynolds = 1e6\nmodel = \"" + model + "\"\n" +
+           keys;
+}
+
+TEST(CaseFile, TransitionKeysReachTheModel) {
+    const CaseSpec c = parse_case_text(
+        transition_case("sa-aft",
+                        "trip_upper = 0.05\ntrip_lower = 0.1\nturbulence_percent = 0.2\n"),
+        "case.toml", ".");
+    EXPECT_EQ(c.model.name, "sa-aft");
+    ASSERT_EQ(c.model.options.size(), 3u);
+    EXPECT_EQ(c.model.options.at("trip_upper"), 0.05);
+    EXPECT_EQ(c.model.options.at("trip_lower"), 0.1);
+    EXPECT_EQ(c.model.options.at("turbulence_percent"), 0.2);
+    // Trips alone with the fully turbulent model.
+    const CaseSpec sa = parse_case_text(transition_case("spalart-allmaras", "trip_upper = 0.3\n"),
+                                        "case.toml", ".");
+    EXPECT_EQ(sa.model.options.at("trip_upper"), 0.3);
+}
+
+TEST(CaseFile, TransitionKeysAreCheckedAndNamed) {
+    // Out of range: the key, its value and the range.
+    const std::string far = error_of(transition_case("sa-aft", "trip_upper = 1.5\n"));
+    EXPECT_NE(far.find("trip_upper = 1.5"), std::string::npos) << far;
+    EXPECT_NE(far.find("from 0 to 1"), std::string::npos) << far;
+    // Excluding each other.
+    const std::string both = error_of(
+        transition_case("sa-aft", "turbulence_percent = 0.1\ncritical_amplification = 9\n"));
+    EXPECT_NE(both.find("not both"), std::string::npos) << both;
+    EXPECT_NE(both.find("case.toml"), std::string::npos) << both;
+    // A key the chosen model does not read is an unknown key, with the model's keys listed.
+    const std::string laminar = error_of(transition_case("laminar", "trip_upper = 0.1\n"));
+    EXPECT_NE(laminar.find("unknown key 'trip_upper'"), std::string::npos) << laminar;
+    const std::string sa =
+        error_of(transition_case("spalart-allmaras", "critical_amplification = 9\n"));
+    EXPECT_NE(sa.find("unknown key 'critical_amplification'"), std::string::npos) << sa;
+    EXPECT_NE(sa.find("trip_upper"), std::string::npos) << sa;
+}
+
+}  // namespace
+}  // namespace veer

@@ -23,50 +23,13 @@
 #include "solver/face_geometry.hpp"
 #include "solver/spalart_allmaras.hpp"
 #include "solver/spalart_allmaras_terms.hpp"
+#include "transport_test_block.hpp"
 
 namespace veer {
 namespace {
 
 constexpr double pi = std::numbers::pi;
 using C = SpalartAllmarasConstants;
-
-/// A block with everything the model needs, face fluxes from a prescribed velocity.
-struct Block {
-    StructuredGrid grid;
-    GridMetrics metrics;
-    Connectivity connectivity;
-    std::vector<BoundaryFace> faces;
-    FaceGeometry geom;
-    std::vector<double> flux_i, flux_j;
-    CellField u, v, local_dt;
-
-    Block(StructuredGrid g, Vec2 velocity) : grid(std::move(g)) {
-        metrics = compute_metrics(grid);
-        connectivity = make_connectivity(grid, metrics);
-        std::vector<VelocityOverride> overrides;
-        for (const BoundarySegment& s : grid.segments())
-            if (s.kind == SegmentKind::wall) overrides.push_back(moving_wall(s.name, velocity));
-        faces = collect_boundary_faces(grid, metrics, {1.0, 0.0}, overrides);
-        geom = make_face_geometry(metrics, connectivity, faces);
-        // F = A . u exactly (uniform velocity: discretely divergence-free).
-        for (const Vec2& a : geom.i_faces.area) flux_i.push_back(dot(a, velocity));
-        for (const Vec2& a : geom.j_faces.area) flux_j.push_back(dot(a, velocity));
-        u = CellField(grid.ni(), grid.nj(), velocity.x);
-        v = CellField(grid.ni(), grid.nj(), velocity.y);
-        local_dt = CellField(grid.ni(), grid.nj(), 0.0);
-    }
-
-    ModelStepInputs inputs() {
-        ModelStepInputs in;
-        in.u = u.view();
-        in.v = v.view();
-        in.flux_i = &flux_i;
-        in.flux_j = &flux_j;
-        in.local_dt = local_dt.view();
-        in.steady = true;
-        return in;
-    }
-};
 
 /// The manufactured field and its source; a sets the size of q against nu.
 struct Manufactured {
@@ -87,7 +50,7 @@ struct Manufactured {
 
 /// Marches to the steady discrete solution; returns the L2 error against q.
 double solve_manufactured(int n, const Manufactured& m, bool second_order) {
-    Block b(test::distorted_unit_square(n, n), m.velocity);
+    test::TransportBlock b(test::distorted_unit_square(n, n), m.velocity);
     SpalartAllmarasSettings s;
     s.model_sources = false;
     s.second_order_convection = second_order;
