@@ -11,6 +11,7 @@
 #include <algorithm>
 #include <cmath>
 #include <iostream>
+#include <optional>
 #include <vector>
 
 #include "app/convergence.hpp"
@@ -18,7 +19,9 @@
 #include "plate_grid.hpp"
 #include "postprocess/wall_faces.hpp"
 #include "solver/flow_solver.hpp"
+#include "solver/sa_aft_model.hpp"
 #include "solver/spalart_allmaras_model.hpp"
+#include "solver/transition_correlations.hpp"
 
 namespace veer::test {
 
@@ -57,13 +60,18 @@ struct SaPlateResult {
 /// Steady run until every residual (u, v, continuity, nu_tilde) is 1e-6 of its reference (the
 /// largest of the first 20 steps: veer run's own ConvergenceMonitor; the plate has no lift or
 /// drag to settle, so only the residuals decide), at most `max_steps` steps.
-inline SaPlateResult run_sa_plate(const PlateGridSpec& spec, long max_steps) {
+/// `transition`: SA-AFT2017b with these [flow] options (its free stream, nu_tilde = 0.1 nu,
+/// upstream of the plate too) in place of fully turbulent SA.
+inline SaPlateResult run_sa_plate(const PlateGridSpec& spec, long max_steps,
+                                  std::optional<ModelOptions> transition = std::nullopt) {
     const StructuredGrid grid = flat_plate_grid(spec);
     SolverSettings s;
     s.mode = TimeMode::steady;
     SpalartAllmarasSettings sa;
-    sa.prescribed_value = [](Vec2) { return 3.0 / sa_plate_reynolds; };
-    s.model = spalart_allmaras_descriptor(sa);
+    const double ratio = transition ? AftConstants::free_stream_ratio : 3.0;
+    sa.prescribed_value = [ratio](Vec2) { return ratio / sa_plate_reynolds; };
+    s.model = transition ? sa_aft_descriptor(sa) : spalart_allmaras_descriptor(sa);
+    if (transition) s.model.options = *transition;
     s.velocity_overrides.push_back(moving_wall("upstream", {1.0, 0.0}));
     const FlowConditions conditions{sa_plate_reynolds, 0.0};
     FlowSolver solver(grid, conditions, s);
