@@ -5,6 +5,7 @@
 #include "mesh/errors.hpp"
 #include "solver/laminar_model.hpp"
 #include "solver/sa_aft_model.hpp"
+#include "solver/sa_bcm_model.hpp"
 #include "solver/spalart_allmaras_model.hpp"
 
 namespace veer {
@@ -16,6 +17,7 @@ std::deque<ModelDescriptor>& registry() {
         laminar_descriptor(),
         spalart_allmaras_descriptor(),
         sa_aft_descriptor(),
+        sa_bcm_descriptor(),
     };
     return models;
 }

@@ -106,9 +106,9 @@ TEST(ChoiceKeys, CheckAndRunAgreeOnEveryWordOfEveryChoiceKey) {
             accepted_words += v.check && v.run;
         }
     }
-    // open/closed, three chord lines, three models, two modes, three pressure solvers, two
+    // open/closed, three chord lines, four models, two modes, three pressure solvers, two
     // steady schemes
-    EXPECT_EQ(accepted_words, 2 + 3 + 3 + 2 + 3 + 2);
+    EXPECT_EQ(accepted_words, 2 + 3 + 4 + 2 + 3 + 2);
 }
 
 TEST(ChoiceKeys, CheckAppliesTheRulesRunApplies) {
@@ -134,6 +134,8 @@ TEST(ChoiceKeys, CheckAppliesTheRulesRunApplies) {
         {{"flow.model=\"sa-aft\"", "flow.turbulence_percent=0.1", "flow.critical_amplification=9"},
          false},
         {{"flow.trip_upper=0.1"}, false},  // the tiny case's laminar model has no trips
+        {{"flow.model=\"sa-bcm\"", "flow.turbulence_percent=0.5", "flow.trip_upper=0.2"}, true},
+        {{"flow.model=\"sa-bcm\"", "flow.critical_amplification=9"}, false},
     };
     for (const auto& [overrides, ok] : cases) {
         const Verdicts v = both_paths(scratch, overrides, runs);

@@ -171,6 +171,11 @@ TEST(SimulationRestart, TransitionRunWithATripContinuesBitForBit) {
                              {"nu_tilde", "amplification", "log_intermittency"});
 }
 
+TEST(SimulationRestart, AlgebraicTransitionRunContinuesBitForBit) {
+    // SA-BCM: nu_tilde alone; its intermittency is recomputed from the restored state.
+    model_restart_reproduces("sa-bcm", "trip_upper = 0.5\n", {"nu_tilde"});
+}
+
 TEST(SimulationRestart, OlderLaminarCheckpointResumes) {
     test::AppScratch scratch;
     const CaseSpec part = small_case("steady", 30);

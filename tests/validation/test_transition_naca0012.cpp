@@ -1,0 +1,92 @@
+/// SA-AFT2017b on NACA 0012 against Sheldahl & Klimas 1981 (SAND80-2114; free-transition drag,
+/// tests/reference/sheldahl1981_naca0012_drag.csv [T], a synthesised table to be read as a band)
+/// and against fully turbulent Spalart-Allmaras on the same grid (transition_runs.hpp: 320 x 112,
+/// y+ 1, far field 60). N_crit 9 (critical_amplification = 9; Mack's relation gives 9.0 at
+/// Tu 0.07 %). Cost: twelve runs of 300-800 steps, about 10 minutes on a loaded 2-core machine.
+/// Cautions: 2D, incompressible; the correlations behind the model are fits to laminar-layer
+/// stability; results are no substitute for testing and licensed engineering review.
+#include <gtest/gtest.h>
+
+#include <cmath>
+#include <iostream>
+
+#include "tests/reference_table.hpp"
+#include "transition_runs.hpp"
+
+namespace veer {
+namespace {
+
+/// The table's alpha column as written there ("0", "2", ...).
+std::string fmt_alpha(double alpha) { return std::to_string(static_cast<int>(alpha)); }
+
+const std::string free_transition = "critical_amplification = 9\n";
+
+test::SectionRun free_run(double reynolds, double alpha) {
+    std::ostringstream name;
+    name << "aft_naca0012_re" << reynolds << "_alpha" << alpha;
+    return test::section_run(name.str(),
+                             test::naca0012_case(reynolds, alpha, "sa-aft", free_transition));
+}
+
+test::SectionRun turbulent_run(double reynolds, double alpha) {
+    std::ostringstream name;
+    name << "sa_naca0012_re" << reynolds << "_alpha" << alpha;
+    return test::section_run(name.str(),
+                             test::naca0012_case(reynolds, alpha, "spalart-allmaras", ""));
+}
+
+/// Cd within `band` of the table's column at each of `alphas`.
+void expect_drag_band(const std::string& column, double reynolds, const std::vector<double>& alphas,
+                      double band) {
+    const test::ReferenceTable t = test::ReferenceTable::read("sheldahl1981_naca0012_drag.csv", 6);
+    ASSERT_FALSE(alphas.empty());
+    for (double alpha : alphas) {
+        const double published = t.number(t.row_where("alpha_deg", fmt_alpha(alpha)), column);
+        const test::SectionRun r = free_run(reynolds, alpha);
+        std::cout << "NACA 0012 Re " << reynolds << " alpha " << alpha
+                  << ", SA-AFT2017b N_crit 9: " << r.iterations << " steps, Cl " << r.cl << ", Cd "
+                  << r.cd << " (Sheldahl & Klimas 1981: " << published << ", "
+                  << 100.0 * (r.cd / published - 1.0) << " %)\n";
+        EXPECT_TRUE(r.converged) << alpha;
+        EXPECT_NEAR(r.cd, published, band * published) << "Re " << reynolds << " alpha " << alpha;
+    }
+}
+
+TEST(TransitionNaca0012, DragAtRe1e6WithinFifteenPercentOfSheldahlKlimas) {
+    expect_drag_band("cd_re1m", 1e6, {0.0, 2.0, 4.0, 6.0}, 0.15);
+}
+
+TEST(TransitionNaca0012, DragAtRe360kWithinTwentyPercentOfSheldahlKlimas) {
+    expect_drag_band("cd_re360k", 3.6e5, {0.0, 2.0, 4.0}, 0.20);
+}
+
+TEST(TransitionNaca0012, FreeTransitionDragWellBelowFullyTurbulent) {
+    const test::SectionRun free = free_run(1e6, 0.0), turbulent = turbulent_run(1e6, 0.0);
+    std::cout << "NACA 0012 Re 1e6 alpha 0: Cd " << free.cd << " free transition, " << turbulent.cd
+              << " fully turbulent (" << 100.0 * (1.0 - free.cd / turbulent.cd) << " % lower)\n";
+    EXPECT_TRUE(free.converged);
+    EXPECT_TRUE(turbulent.converged);
+    EXPECT_LE(free.cd, 0.75 * turbulent.cd);
+}
+
+TEST(TransitionNaca0012, TripAtOnePercentReproducesFullyTurbulentSa) {
+    // Re 6e6, alpha 4: both surfaces tripped at x/c 0.01 with the transition model against
+    // fully turbulent SA; within 2 % in Cl and Cd.
+    const double alpha = 4.0;
+    const test::SectionRun tripped = test::section_run(
+        "aft_naca0012_trip001_re6e6",
+        test::naca0012_case(6e6, alpha, "sa-aft",
+                            free_transition + "trip_upper = 0.01\ntrip_lower = 0.01\n"));
+    const test::SectionRun turbulent = turbulent_run(6e6, alpha);
+    std::cout << "NACA 0012 Re 6e6 alpha 4: tripped at 0.01 Cl " << tripped.cl << " Cd "
+              << tripped.cd << " (" << tripped.iterations << " steps); fully turbulent Cl "
+              << turbulent.cl << " Cd " << turbulent.cd << " (" << turbulent.iterations
+              << " steps)\n";
+    EXPECT_TRUE(tripped.converged);
+    EXPECT_TRUE(turbulent.converged);
+    EXPECT_NEAR(tripped.cl, turbulent.cl, 0.02 * std::abs(turbulent.cl));
+    EXPECT_NEAR(tripped.cd, turbulent.cd, 0.02 * turbulent.cd);
+}
+
+}  // namespace
+}  // namespace veer

@@ -1,0 +1,52 @@
+#pragma once
+/// NACA 0012 runs of the transition validation, each through `veer run`'s own path
+/// (run_run_command) on the grid of the project's transition check: 320 cells around, 112
+/// normal, far field 60 chords, first cell at y+ 1 (the wake default), steady, the case files'
+/// default scheme and criteria. Each run is computed once per build (computed_once.hpp) and
+/// shared by the tests that read it.
+#include <filesystem>
+#include <fstream>
+#include <sstream>
+#include <string>
+
+#include "app/commands.hpp"
+#include "computed_once.hpp"
+#include "io/json_writer.hpp"
+
+namespace veer::test {
+
+/// What the tests read from a run's summary.json.
+struct SectionRun {
+    double cl = 0.0, cd = 0.0;
+    long iterations = 0;
+    bool converged = false;
+};
+
+/// The case text of one point; `flow_keys` are further [flow] lines (model options).
+inline std::string naca0012_case(double reynolds, double alpha, const std::string& model,
+                                 const std::string& flow_keys, int around = 320, int normal = 112) {
+    std::ostringstream s;
+    s << "[geometry]\nnaca = \"0012\"\n[mesh]\naround = " << around << "\nnormal = " << normal
+      << "\nfar_field = 60\ny_plus = 1.0\n[flow]\nreynolds = " << reynolds << "\nalpha = " << alpha
+      << "\nmodel = \"" << model << "\"\n"
+      << flow_keys << "[run]\nmode = \"steady\"\nsteps = 6000\n";
+    return s.str();
+}
+
+/// The run of `case_text`, computed once per build under `name`.
+inline SectionRun section_run(const std::string& name, const std::string& case_text) {
+    const std::filesystem::path dir =
+        computed_once(name, case_text, [&](const std::filesystem::path& d) {
+            std::ofstream(d / "case.toml") << case_text;
+            RunOptions run;
+            run.input.case_file = d / "case.toml";
+            run.out_dir = d / "run";
+            run.quiet = true;
+            run_run_command(run);  // exit status 1 (not converged) is read from the summary
+        });
+    const nlohmann::json s = read_json_file(dir / "run" / "summary.json");
+    return {s.at("cl").get<double>(), s.at("cd").get<double>(), s.at("iterations").get<long>(),
+            s.at("converged").get<bool>()};
+}
+
+}  // namespace veer::test
