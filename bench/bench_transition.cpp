@@ -52,7 +52,8 @@ int main(int argc, char** argv) {
     fmt::print("NACA 0012 Re 1e6 alpha 4, 384x128, {} threads\n", threads);
     print("  fully turbulent SA", sa);
     print("  SA-AFT2017b       ", aft);
-    const double steps = static_cast<double>(aft.run.result.steps) / sa.run.result.steps;
+    const double steps =
+        static_cast<double>(aft.run.result.steps) / static_cast<double>(sa.run.result.steps);
     fmt::print(
         "  ratio SA-AFT / SA: steps {:.2f}, processor time {:.2f}, wall time {:.2f} (target "
         "<= 2)\n",

@@ -7,6 +7,7 @@
 #include <filesystem>
 #include <fstream>
 #include <sstream>
+#include <stdexcept>
 #include <string>
 
 #include "app/commands.hpp"
@@ -42,7 +43,12 @@ inline SectionRun section_run(const std::string& name, const std::string& case_t
             run.input.case_file = d / "case.toml";
             run.out_dir = d / "run";
             run.quiet = true;
-            run_run_command(run);  // exit status 1 (not converged) is read from the summary
+            // 0 converged, 1 the step cap (read from the summary); anything else (an interrupt,
+            // bad input, divergence) throws, so that no stamp marks the folder as computed.
+            const int status = run_run_command(run);
+            if (status != 0 && status != 1)
+                throw std::runtime_error("veer run ended with exit status " +
+                                         std::to_string(status) + " in " + d.string());
         });
     const nlohmann::json s = read_json_file(dir / "run" / "summary.json");
     return {s.at("cl").get<double>(), s.at("cd").get<double>(), s.at("iterations").get<long>(),
