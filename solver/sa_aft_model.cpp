@@ -2,8 +2,7 @@
 
 #include <cmath>
 
-#include "mesh/wall_distance.hpp"
-#include "solver/spalart_allmaras.hpp"
+#include "solver/spalart_allmaras_family.hpp"
 #include "solver/spalart_allmaras_model.hpp"
 #include "solver/spalart_allmaras_terms.hpp"
 #include "solver/transition_correlations.hpp"
@@ -14,7 +13,6 @@
 namespace veer {
 namespace {
 
-constexpr const char* nu_tilde_name = "nu_tilde";
 constexpr const char* amplification_name = "amplification";
 constexpr const char* log_intermittency_name = "log_intermittency";
 /// g~ is kept >= -30 (our choice): exp(-30) ~ 1e-13 is zero intermittency to any output
@@ -29,16 +27,11 @@ ScalarColumn transition_column() {
     return c;
 }
 
-SpalartAllmarasSettings with_aft_free_stream(SpalartAllmarasSettings s) {
-    s.free_stream_ratio = AftConstants::free_stream_ratio;
-    return s;
-}
-
-class SaAftModel final : public FlowModel {
+class SaAftModel final : public SpalartAllmarasFamilyModel {
 public:
     SaAftModel(const ModelSetup& s, const SpalartAllmarasSettings& settings)
-        : m_core(s.geom, s.faces, s.connectivity, wall_distance(s.grid, s.metrics), s.nu,
-                 with_aft_free_stream(settings)),
+        : SpalartAllmarasFamilyModel(
+              s, with_free_stream_ratio(settings, AftConstants::free_stream_ratio)),
           m_flow(s.geom, s.faces, s.connectivity, m_core.wall_distance(), s.nu),
           m_n(s.geom, s.faces, s.connectivity, transition_column(), 0.0),
           m_g(s.geom, s.faces, s.connectivity, transition_column(), 0.0),
@@ -46,7 +39,6 @@ public:
           m_nu(s.nu),
           m_n_crit(critical_amplification_of(s.options)),
           m_time_scale(settings.time_step_scale) {
-        m_variables.push_back({nu_tilde_name, "nu~", m_core.boundary_column()});
         m_variables.push_back({amplification_name, "n~", transition_column()});
         m_variables.push_back({log_intermittency_name, "g~", transition_column()});
         const std::size_t n = s.geom.volume.size();
@@ -54,8 +46,6 @@ public:
         m_core.set_source_modifiers(nullptr, &m_ft2);
         update_ft2();
     }
-
-    const std::vector<ModelVariable>& variables() const override { return m_variables; }
 
     ModelStepReport advance(const ModelStepInputs& in) override {
         update_ft2();
@@ -65,25 +55,22 @@ public:
         m_nut = m_core.eddy_viscosity();
         const ScalarStepReport n = step_amplification(in);
         const ScalarStepReport g = step_intermittency(in);
-        ModelStepReport r;
-        r.residuals = {t.residual, n.residual, g.residual};
-        r.finite = t.finite && n.finite && g.finite;
-        if (!t.finite)
-            r.worst_i = t.worst_i, r.worst_j = t.worst_j, r.worst_variable = nu_tilde_name;
-        else if (!n.finite)
-            r.worst_i = n.worst_i, r.worst_j = n.worst_j, r.worst_variable = amplification_name;
-        else if (!g.finite)
-            r.worst_i = g.worst_i, r.worst_j = g.worst_j, r.worst_variable = log_intermittency_name;
+        ModelStepReport r = report_of(t);
+        r.residuals.push_back(n.residual);
+        r.residuals.push_back(g.residual);
+        for (const auto& [step, name] :
+             {std::pair{n, amplification_name}, std::pair{g, log_intermittency_name}})
+            if (r.finite && !step.finite) {
+                r.finite = false;
+                r.worst_i = step.worst_i;
+                r.worst_j = step.worst_j;
+                r.worst_variable = name;
+            }
         return r;
     }
 
-    bool has_eddy_viscosity() const override { return true; }
-    std::vector<double> eddy_viscosity() const override { return m_core.eddy_viscosity(); }
-    void face_eddy_viscosity(std::vector<double>& on_i, std::vector<double>& on_j) const override {
-        m_core.face_eddy_viscosity(on_i, on_j);
-    }
     void fold_wake_cut_lines(bool fold) override {
-        m_core.fold_wake_cut_lines(fold);
+        SpalartAllmarasFamilyModel::fold_wake_cut_lines(fold);
         m_n.fold_wake_cut_lines(fold);
         m_g.fold_wake_cut_lines(fold);
     }
@@ -94,8 +81,8 @@ public:
                 {log_intermittency_name, m_g.values()}};
     }
     void set_values(const std::vector<NamedArray>& arrays) override {
+        SpalartAllmarasFamilyModel::set_values(arrays);
         for (const NamedArray& a : arrays) {
-            if (a.name == nu_tilde_name) m_core.set_nu_tilde(a.values);
             if (a.name == amplification_name) m_n.set_values(a.values);
             if (a.name == log_intermittency_name) m_g.set_values(a.values);
         }
@@ -151,12 +138,10 @@ private:
         return m_g.advance(in, terms(lowest_log_intermittency, 0.0));
     }
 
-    SpalartAllmaras m_core;
     TransitionFlowQuantities m_flow;
     TransportedScalar m_n, m_g;
     std::vector<TripZone> m_zones;
     double m_nu, m_n_crit, m_time_scale;
-    std::vector<ModelVariable> m_variables;
     std::vector<double> m_ft2, m_explicit, m_implicit, m_nut, m_nut_i, m_nut_j, m_mu_i, m_mu_j;
 };
 

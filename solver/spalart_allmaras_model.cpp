@@ -1,20 +1,15 @@
 #include "solver/spalart_allmaras_model.hpp"
 
-#include "mesh/wall_distance.hpp"
-#include "solver/spalart_allmaras.hpp"
+#include "solver/spalart_allmaras_family.hpp"
 #include "solver/transition_options.hpp"
 
 namespace veer {
 namespace {
 
-constexpr const char* variable_name = "nu_tilde";
-
-class SpalartAllmarasModel final : public FlowModel {
+class SpalartAllmarasModel final : public SpalartAllmarasFamilyModel {
 public:
     SpalartAllmarasModel(const ModelSetup& s, const SpalartAllmarasSettings& settings)
-        : m_core(s.geom, s.faces, s.connectivity, wall_distance(s.grid, s.metrics), s.nu,
-                 settings) {
-        m_variables.push_back({variable_name, "nu~", m_core.boundary_column()});
+        : SpalartAllmarasFamilyModel(s, settings) {
         // Trips alone: no production where a trip holds the layer laminar (the rest of the
         // model as it is); without trips the standard model to the bit.
         const TripPositions trips = trips_of(s.options);
@@ -27,38 +22,11 @@ public:
         }
     }
 
-    const std::vector<ModelVariable>& variables() const override { return m_variables; }
-
     ModelStepReport advance(const ModelStepInputs& in) override {
-        const TurbulenceReport t = m_core.advance(in);
-        ModelStepReport r;
-        r.residuals = {t.residual};
-        r.finite = t.finite;
-        if (!t.finite) {
-            r.worst_i = t.worst_i;
-            r.worst_j = t.worst_j;
-            r.worst_variable = variable_name;
-        }
-        return r;
-    }
-
-    bool has_eddy_viscosity() const override { return true; }
-    std::vector<double> eddy_viscosity() const override { return m_core.eddy_viscosity(); }
-    void face_eddy_viscosity(std::vector<double>& on_i, std::vector<double>& on_j) const override {
-        m_core.face_eddy_viscosity(on_i, on_j);
-    }
-
-    void fold_wake_cut_lines(bool fold) override { m_core.fold_wake_cut_lines(fold); }
-
-    std::vector<NamedArray> values() const override { return {{variable_name, m_core.nu_tilde()}}; }
-    void set_values(const std::vector<NamedArray>& arrays) override {
-        for (const NamedArray& a : arrays)
-            if (a.name == variable_name) m_core.set_nu_tilde(a.values);
+        return report_of(m_core.advance(in));
     }
 
 private:
-    SpalartAllmaras m_core;
-    std::vector<ModelVariable> m_variables;
     std::vector<double> m_production;  ///< per cell, with trips only
 };
 
