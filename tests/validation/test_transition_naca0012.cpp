@@ -2,7 +2,12 @@
 /// tests/reference/sheldahl1981_naca0012_drag.csv [T], a synthesised table to be read as a band)
 /// and against fully turbulent Spalart-Allmaras on the same grid (transition_runs.hpp: 320 x 112,
 /// y+ 1, far field 60). N_crit 9 (critical_amplification = 9; Mack's relation gives 9.0 at
-/// Tu 0.07 %). Cost: twelve runs of 300-800 steps, about 10 minutes on a loaded 2-core machine.
+/// Tu 0.07 %). Cost: twelve runs of about 300-800 steps (alpha 0, Re 1e6: 354 steps, 36 s on
+/// 2 threads of a lightly loaded machine, 250 s under a load average near 7).
+/// Measured 15:26 UTC: Cd 0.00517 at Re 1e6, alpha 0 is 20 % below the table's 0.0065, so
+/// DragAtRe1e6WithinFifteenPercentOfSheldahlKlimas fails at alpha 0; its band is the and
+/// is left as it is (the model, its shape-factor limiter and the late flat-plate transition are
+/// the suspects; see solver/README.md, "Transition models").
 /// Cautions: 2D, incompressible; the correlations behind the model are fits to laminar-layer
 /// stability; results are no substitute for testing and licensed engineering review.
 #include <gtest/gtest.h>
