@@ -23,17 +23,16 @@ namespace {
 /// Normal distance of point p from the line through the face centre with unit normal n.
 double distance_from_face(Vec2 p, Vec2 face_center, Vec2 n) { return dot(p - face_center, n); }
 
-/// Wall derivative of f(d) with f(0) = 0 through (d0, f0) and (d1, f1): the A of f = A d + B d^2.
-double wall_derivative(double d0, double f0, double d1, double f1) {
-    return (f0 * d1 * d1 - f1 * d0 * d0) / (d0 * d1 * (d1 - d0));
-}
-
 /// Value at d = 0 of the line through (d0, f0) and (d1, f1).
 double extrapolate_to_wall(double d0, double f0, double d1, double f1) {
     return f0 - d0 * (f1 - f0) / (d1 - d0);
 }
 
 }  // namespace
+
+double one_sided_wall_derivative(double d0, double f0, double d1, double f1) {
+    return (f0 * d1 * d1 - f1 * d0 * d0) / (d0 * d1 * (d1 - d0));
+}
 
 std::vector<WallFaceState> evaluate_wall_faces(const StructuredGrid& grid,
                                                const GridMetrics& metrics, const FlowFields& fields,
@@ -65,7 +64,7 @@ std::vector<WallFaceState> evaluate_wall_faces(const StructuredGrid& grid,
             wall_pressure == WallPressure::extrapolated ? extrapolate_to_wall(d0, p0, d1, p1) : p0;
         const double ut0 = fields.u[c0] * f.tangent.x + fields.v[c0] * f.tangent.y;
         const double ut1 = fields.u[c1] * f.tangent.x + fields.v[c1] * f.tangent.y;
-        f.shear = nu * wall_derivative(d0, ut0, d1, ut1);
+        f.shear = nu * one_sided_wall_derivative(d0, ut0, d1, ut1);
         faces.push_back(f);
     }
     return faces;

@@ -47,6 +47,11 @@ struct WallFaceState {
     double first_cell_distance = 0;  ///< wall distance of the first cell's centroid
 };
 
+/// Wall derivative df/dn of a quantity that vanishes on the wall, f(d) = A d + B d^2 through the
+/// first two cells (d0, f0), (d1, f1): returns A. The stencil of the wall shear (and of the
+/// turbulence index, transition_locator.hpp).
+double one_sided_wall_derivative(double d0, double f0, double d1, double f1);
+
 /// Wall pressure and shear on every wall face. The shear is the one-sided second-order wall
 /// derivative of the tangential velocity through the first two cells, u_t(d) = A d + B d^2 with
 /// u_t(0) = 0 (no slip), times nu = 1/Re (the eddy viscosity vanishes on the wall).
