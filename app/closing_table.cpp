@@ -7,6 +7,7 @@
 
 #include "app/reader_labels.hpp"
 #include "app/run_report.hpp"
+#include "app/transition_figures.hpp"
 #include "postprocess/wake_profiles.hpp"
 
 namespace veer {
@@ -65,6 +66,13 @@ void print_section_lines(const RunAnalysis& a) {
     if (!a.wake.empty())
         fmt::print("  wake: downwash in deg; {}\n",
                    downward_flux_words(WakeProfileOptions{}.half_height));
+    if (const std::string t = transition_line(a); !t.empty()) {
+        fmt::print("  {}\n", t);
+        const std::string up = regions_text(a.regions_upper), low = regions_text(a.regions_lower);
+        if (!up.empty() || !low.empty())
+            fmt::print("  separated regions: upper {}; lower {}\n", up.empty() ? "none" : up,
+                       low.empty() ? "none" : low);
+    }
     for (const WakeProfile& w : a.wake)
         fmt::print(
             "  wake {:.2f} chords behind the TE: downwash {:+.3f} deg, downward momentum "

@@ -30,11 +30,14 @@ std::string polar_text(const std::vector<PointRecord>& points) {
     out << "\n";
     for (const PointRecord& r : points) {
         // cl_basis is free text without commas (sweep_record.hpp), so no quoting is needed.
-        out << fmt::format(
-            "{:g},{},{},{},{},{},{},{},{},{},{},{},{},{},{}\n", r.alpha, cell(r.cl), cell(r.cd),
-            cell(r.cm), cell(r.cl_momentum), cell(r.separation_upper), cell(r.reattachment_upper),
-            cell(r.separation_lower), cell(r.reattachment_lower), r.regime, cell(r.strouhal),
-            cell(r.cl_amplitude), r.cl_basis, cell(r.cl_steady), cell(r.contour_distance));
+        out << fmt::format("{:g},{},{},{},{},{},{},{},{},{},{},{},{},{},{},{},{},{},{},{}\n",
+                           r.alpha, cell(r.cl), cell(r.cd), cell(r.cm), cell(r.cl_momentum),
+                           cell(r.separation_upper), cell(r.reattachment_upper),
+                           cell(r.separation_lower), cell(r.reattachment_lower), r.regime,
+                           cell(r.strouhal), cell(r.cl_amplitude), r.cl_basis, cell(r.cl_steady),
+                           cell(r.contour_distance), cell(r.transition_upper),
+                           cell(r.transition_lower), cell(r.laminar_bubble_upper),
+                           cell(r.laminar_bubble_upper_end), cell(r.turbulent_separation_upper));
     }
     return out.str();
 }
@@ -73,6 +76,12 @@ nlohmann::json summary_json(const std::vector<PointRecord>& points,
     s["unsteady_points"] = unsteady;
     s["failed_points"] = failed;
     s["wall_seconds_points"] = wall;
+    s["model_warning"] = nullptr;
+    for (const PointRecord& r : points)
+        if (!r.model_warning.empty()) {
+            s["model_warning"] = r.model_warning;
+            break;
+        }
     return s;
 }
 
@@ -93,7 +102,12 @@ const std::vector<const char*>& polar_columns() {
                                                      "cl_amplitude",
                                                      "cl_basis",
                                                      "cl_steady",
-                                                     "contour_distance"};
+                                                     "contour_distance",
+                                                     "transition_upper",
+                                                     "transition_lower",
+                                                     "laminar_bubble_upper",
+                                                     "laminar_bubble_upper_end",
+                                                     "turbulent_separation_upper"};
     return columns;
 }
 

@@ -7,6 +7,7 @@
 
 #include "app/commands.hpp"
 #include "app/mesh_pipeline.hpp"
+#include "app/model_range_note.hpp"
 #include "app/reader_labels.hpp"
 #include "app/run_report.hpp"
 #include "app/section_notes.hpp"
@@ -104,6 +105,7 @@ int run_run_command(const RunOptions& o) {
                grid_words(spec.mesh, spec.geometry.circle, grid.ni(), grid.nj()),
                spec.flow.reynolds, spec.flow.alpha_deg, spec.model.name, mode_word(spec.run.mode));
     if (header_section) print_section_notes(*header_section, 15);
+    if (const auto note = model_range_note(spec)) fmt::print("model warning: {}\n", *note);
     SimulationOptions options;
     options.progress = !o.quiet;
     // A time-accurate run samples the control-volume route after every step for its time

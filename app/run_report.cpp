@@ -7,6 +7,8 @@
 #include <nlohmann/json.hpp>
 
 #include "app/closing_table.hpp"
+#include "app/model_range_note.hpp"
+#include "app/transition_figures.hpp"
 #include "io/case_choices.hpp"
 #include "io/json_writer.hpp"
 #include "io/run_tables.hpp"
@@ -170,7 +172,10 @@ nlohmann::json summary_json(const Simulation& sim, const RunResult& r, const Run
         s["trailing_edge_cp_upper"] = a.kutta.cp_upper;
         s["trailing_edge_cp_lower"] = a.kutta.cp_lower;
         s["trailing_edge_cp_difference"] = a.kutta.difference;
+        s.update(transition_summary(a));
     }
+    const auto note = model_range_note(spec);
+    s["model_warning"] = note ? nlohmann::json(*note) : nlohmann::json(nullptr);
     if (spec.run.mode == TimeMode::time_accurate)
         s["time_average"] = unsteady ? time_average_json(*unsteady, spec)
                                      : time_average_json(unsteady_figures(sim, nullptr), spec);

@@ -6,6 +6,7 @@
 #include <chrono>
 #include <cmath>
 
+#include "app/model_range_note.hpp"
 #include "app/commands.hpp"
 #include "app/mesh_pipeline.hpp"
 #include "app/polar_table.hpp"
@@ -164,6 +165,7 @@ int run_sweep(const SweepOptions& o, const SweepRanks& ranks) {
                    grid_words(mesh.spec, base.geometry.circle, mesh.grid.ni(), mesh.grid.nj()),
                    base.flow.reynolds, base.model.name, angles.size(), ranks.size(),
                    ranks.size() > 1 ? "es" : "");
+        if (const auto note = model_range_note(base)) fmt::print("model warning: {}\n", *note);
         if (!base.geometry.circle) {  // a circle has no chord line or trailing edge to place
             print_section_notes(mesh.section, 15);
             write_json_file(o.out_dir / "section.json", section_placement_json(mesh.section));

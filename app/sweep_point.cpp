@@ -5,6 +5,7 @@
 #include <cmath>
 #include <memory>
 
+#include "app/model_range_note.hpp"
 #include "app/residual_plateau.hpp"
 #include "app/run_report.hpp"
 #include "app/simulation.hpp"
@@ -37,8 +38,18 @@ void add_separation(PointRecord& r, const RunAnalysis& a) {
     r.reattachment_lower = first_x(s.lower.reattachments);
     if (s.upper.trailing_edge_separation)
         r.trailing_edge_separation_upper = s.upper.trailing_edge_separation->x;
-    for (const SeparationBubble& b : s.upper.bubbles)
-        if (b.start.x < trailing_edge_zone) r.upper_bubble = true;
+    for (const SeparatedRegion& g : a.regions_upper) {
+        const bool closed_by_transition = g.kind == SeparationKind::laminar_bubble && g.transition;
+        if (g.end && g.start.x < trailing_edge_zone && !closed_by_transition) r.upper_bubble = true;
+        if (closed_by_transition && !r.laminar_bubble_upper) {
+            r.laminar_bubble_upper = g.start.x;
+            r.laminar_bubble_upper_end = g.end->x;
+        }
+        if (g.kind == SeparationKind::turbulent_separation && !r.turbulent_separation_upper)
+            r.turbulent_separation_upper = g.start.x;
+    }
+    if (a.transition.upper) r.transition_upper = a.transition.upper->x;
+    if (a.transition.lower) r.transition_lower = a.transition.lower->x;
 }
 
 /// Control-volume lift on the largest contour.
@@ -257,6 +268,7 @@ PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const CaseSpe
     r.alpha = alpha;
     r.folder = point_folder_name(alpha);
     r.case_text = spec.text;
+    r.model_warning = model_range_note(spec).value_or("");
     const fs::path dir = sweep_dir / r.folder;
     PointOutcome out;
     const bool steady_mode = spec.run.mode == TimeMode::steady;
@@ -312,7 +324,7 @@ PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const CaseSpe
             if (p.analysis) add_separation(r, *p.analysis);
             out.fields = p.sim->solver().fields();
             if (steady_mode && p.result.status == RunStatus::converged &&
-                sweep.stability_time > 0 && upper_surface_separated(r)) {
+                sweep.stability_time > 0 && upper_surface_needs_stability_check(r)) {
                 const TimeAccurateStart check{disturbed(p.sim->solver().fields(), p.sim->metrics()),
                                               sweep.stability_time, r.cl};
                 run_time_accurate(r, out, sweep, alpha, grid, dir, check, label);

@@ -24,6 +24,11 @@ bool upper_surface_separated(const PointRecord& r) {
                               *r.trailing_edge_separation_upper < trailing_edge_zone);
 }
 
+bool upper_surface_needs_stability_check(const PointRecord& r) {
+    return upper_surface_separated(r) ||
+           (r.laminar_bubble_upper && *r.laminar_bubble_upper < trailing_edge_zone);
+}
+
 nlohmann::json record_to_json(const PointRecord& r) {
     return {
         {"alpha", r.alpha},
@@ -45,6 +50,12 @@ nlohmann::json record_to_json(const PointRecord& r) {
         {"reattachment_lower", optional_value(r.reattachment_lower)},
         {"trailing_edge_separation_upper", optional_value(r.trailing_edge_separation_upper)},
         {"upper_bubble", r.upper_bubble},
+        {"transition_upper", optional_value(r.transition_upper)},
+        {"transition_lower", optional_value(r.transition_lower)},
+        {"laminar_bubble_upper", optional_value(r.laminar_bubble_upper)},
+        {"laminar_bubble_upper_end", optional_value(r.laminar_bubble_upper_end)},
+        {"turbulent_separation_upper", optional_value(r.turbulent_separation_upper)},
+        {"model_warning", r.model_warning},
         {"strouhal", optional_value(r.strouhal)},
         {"cl_amplitude", r.cl_amplitude},
         {"cd_amplitude", r.cd_amplitude},
@@ -83,6 +94,12 @@ PointRecord record_from_json(const nlohmann::json& j, const std::string& source)
         r.reattachment_lower = read_optional(j, "reattachment_lower");
         r.trailing_edge_separation_upper = read_optional(j, "trailing_edge_separation_upper");
         r.upper_bubble = j.value("upper_bubble", false);
+        r.transition_upper = read_optional(j, "transition_upper");
+        r.transition_lower = read_optional(j, "transition_lower");
+        r.laminar_bubble_upper = read_optional(j, "laminar_bubble_upper");
+        r.laminar_bubble_upper_end = read_optional(j, "laminar_bubble_upper_end");
+        r.turbulent_separation_upper = read_optional(j, "turbulent_separation_upper");
+        r.model_warning = j.value("model_warning", std::string());
         r.strouhal = read_optional(j, "strouhal");
         r.cl_amplitude = number("cl_amplitude");
         r.cd_amplitude = number("cd_amplitude");

@@ -32,7 +32,18 @@ struct PointRecord {
     std::optional<double> separation_lower, reattachment_lower;
     /// Upper surface: where the flow leaves the wall for good (no reattachment aft), x/c.
     std::optional<double> trailing_edge_separation_upper;
-    bool upper_bubble = false;       ///< a closed separation bubble on the upper surface
+    /// A closed separation bubble on the upper surface ahead of the trailing-edge zone, other
+    /// than a laminar bubble that a transition inside it closes (that one is the layer's normal
+    /// way to turn turbulent at these Reynolds numbers, not separation onset).
+    bool upper_bubble = false;
+    /// Transition x/c per surface (postprocess/transition_locator.hpp); none when the surface
+    /// stays laminar or the model has no turbulence index.
+    std::optional<double> transition_upper, transition_lower;
+    /// The first laminar bubble of the upper surface with a transition inside: (start, end) x/c.
+    std::optional<double> laminar_bubble_upper, laminar_bubble_upper_end;
+    /// The first turbulent separation of the upper surface, x/c.
+    std::optional<double> turbulent_separation_upper;
+    std::string model_warning;  ///< model_range_note of the point's case; empty when none
     std::optional<double> strouhal;  ///< f c / U_inf of the lift (unsteady points)
     double cl_amplitude = 0.0, cd_amplitude = 0.0, cm_amplitude = 0.0;  ///< half peak-to-peak
     int cycles = 0;       ///< whole cycles averaged over
@@ -49,6 +60,10 @@ constexpr double trailing_edge_zone = 0.95;
 /// there, or reversed flow from ahead of it to the trailing edge): the separation-onset
 /// criterion of the polar, and what makes a sweep check a converged point's stability.
 bool upper_surface_separated(const PointRecord& r);
+
+/// upper_surface_separated, or a closed laminar bubble on the upper surface: where a converged
+/// steady point may still hide an unsteady flow, so the sweep checks its stability.
+bool upper_surface_needs_stability_check(const PointRecord& r);
 
 nlohmann::json record_to_json(const PointRecord& r);
 /// Throws InputError naming `source` when a key is missing or of the wrong type.

@@ -3,6 +3,7 @@
 #include "mesh/circle.hpp"
 #include "postprocess/grid_contour.hpp"
 #include "postprocess/recirculation.hpp"
+#include "postprocess/wall_faces.hpp"
 
 namespace veer {
 namespace {
@@ -22,6 +23,29 @@ CircleFigures circle_figures(const StructuredGrid& grid, const GridMetrics& metr
     return c;
 }
 
+/// nu~ of a Spalart–Allmaras-family model among the fields, if any.
+const std::vector<double>* find_nu_tilde(const FlowFields& fields) {
+    for (const NamedArray& a : fields.model_fields)
+        if (a.name == sa_working_variable) return &a.values;
+    return nullptr;
+}
+
+/// The turbulence index on the surface points, the transition on each surface and the kind of
+/// each separated region (a laminar model: no index, no transition, laminar regions).
+void add_transition(const StructuredGrid& grid, const GridMetrics& metrics,
+                    const FlowFields& fields, const std::vector<WallFaceState>& wall,
+                    RunAnalysis& a) {
+    if (const std::vector<double>* nu_tilde = find_nu_tilde(fields)) {
+        const WallTurbulenceIndex index = turbulence_index(grid, metrics, *nu_tilde, wall);
+        for (auto* side : {&a.surface.upper, &a.surface.lower})
+            for (SurfacePoint& p : *side) p.turbulence_index = index.at(p.i);
+        a.transition = find_transition(a.surface, index, a.separation.stagnation);
+        a.has_turbulence_index = true;
+    }
+    a.regions_upper = separated_regions(a.separation.upper, a.transition.upper);
+    a.regions_lower = separated_regions(a.separation.lower, a.transition.lower);
+}
+
 }  // namespace
 
 RunAnalysis analyse_flow(const StructuredGrid& grid, const GridMetrics& metrics,
@@ -29,8 +53,11 @@ RunAnalysis analyse_flow(const StructuredGrid& grid, const GridMetrics& metrics,
                          const AnalysisPlaces& places) {
     RunAnalysis a;
     a.forces = integrate_surface_forces(grid, metrics, fields, conditions, places.forces);
-    a.surface = surface_distribution(grid, metrics, fields, conditions);
+    const std::vector<WallFaceState> wall =
+        evaluate_wall_faces(grid, metrics, fields, conditions, WallPressure::extrapolated);
+    a.surface = surface_distribution(grid, wall, conditions);
     a.separation = find_separation(a.surface);
+    add_transition(grid, metrics, fields, wall, a);
     a.kutta = kutta_check(a.surface);
     const auto contours = contours_at_distances(grid, places.contours);
     a.momentum = contour_forces(grid, metrics, fields, conditions, contours);

@@ -1,6 +1,6 @@
 #pragma once
 /// The post-processing of a run's fields in one call: the surface route (forces, Cp, Cf, y+),
-/// separation and the Kutta check, the control-volume and circulation routes on the requested
+/// separation, transition and the kind of each separated region, the Kutta check, the control-volume and circulation routes on the requested
 /// contours side by side with the surface route, and the wake profiles. The run report, the
 /// closing table and the sweep records all read this one result.
 #include <optional>
@@ -13,8 +13,10 @@
 #include "postprocess/kutta_check.hpp"
 #include "postprocess/lift_routes.hpp"
 #include "postprocess/separation.hpp"
+#include "postprocess/separation_regimes.hpp"
 #include "postprocess/surface_distribution.hpp"
 #include "postprocess/surface_forces.hpp"
+#include "postprocess/transition_locator.hpp"
 #include "postprocess/wake_profiles.hpp"
 #include "solver/flow_fields.hpp"
 
@@ -46,6 +48,13 @@ struct RunAnalysis {
     SurfaceDistribution surface;
     SeparationReport separation;
     KuttaCheck kutta;
+    /// Whether the fields hold nu~ (a Spalart–Allmaras-family model): the surface points then
+    /// carry the turbulence index and `transition` is searched for.
+    bool has_turbulence_index = false;
+    TransitionReport transition;  ///< where each surface turns turbulent (transition_locator.hpp)
+    /// Each separated region with its kind (separation_regimes.hpp), from the leading edge aft.
+    std::vector<SeparatedRegion> regions_upper;
+    std::vector<SeparatedRegion> regions_lower;
     std::vector<ContourForces> momentum;          ///< one per contour distance
     std::vector<ContourCirculation> circulation;  ///< the same contours
     std::vector<RouteComparison> routes;          ///< both routes against the surface route

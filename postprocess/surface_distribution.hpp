@@ -7,6 +7,7 @@
 /// Cf carries the sign of the wall shear along the surface from the leading edge towards the
 /// trailing edge, so Cf < 0 marks reversed flow on either surface. y+ = d1 u_tau / nu of the first
 /// cell's centroid, u_tau = sqrt(|tau_w|).
+#include <limits>
 #include <vector>
 
 #include "mesh/grid_metrics.hpp"
@@ -28,6 +29,8 @@ struct SurfacePoint {
     double cp = 0.0;
     double cf = 0.0;  ///< positive where the wall flow runs from the leading edge aft
     double y_plus = 0.0;
+    /// Spalart–Allmaras turbulence index (transition_locator.hpp); NaN without nu~ (laminar).
+    double turbulence_index = std::numeric_limits<double>::quiet_NaN();
 };
 
 /// Both surfaces, each ordered from the leading edge to the trailing edge.

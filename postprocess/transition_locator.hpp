@@ -25,6 +25,10 @@
 
 namespace veer {
 
+/// The name the Spalart–Allmaras family's models give nu~ among their variables (the model files
+/// in solver/); the analysis finds the index's input by it.
+inline constexpr const char* sa_working_variable = "nu_tilde";
+
 /// The turbulence index on the wall faces, by face index i along the C.
 struct WallTurbulenceIndex {
     int first_i = 0;             ///< i of values[0] (the first wall face)
