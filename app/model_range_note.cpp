@@ -14,7 +14,8 @@ namespace {
 std::string transition_alternative() {
     std::string out;
     for (const char* name : {"sa-aft", "sa-bcm"})
-        if (find_model(name)) out += fmt::format("{}model = \"{}\"", out.empty() ? "" : " or ", name);
+        if (find_model(name))
+            out += fmt::format("{}model = \"{}\"", out.empty() ? "" : " or ", name);
     return out;
 }
 

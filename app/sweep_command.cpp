@@ -6,9 +6,9 @@
 #include <chrono>
 #include <cmath>
 
-#include "app/model_range_note.hpp"
 #include "app/commands.hpp"
 #include "app/mesh_pipeline.hpp"
+#include "app/model_range_note.hpp"
 #include "app/polar_table.hpp"
 #include "app/progress_line.hpp"
 #include "app/reader_labels.hpp"

@@ -43,7 +43,7 @@ struct PointRecord {
     std::optional<double> laminar_bubble_upper, laminar_bubble_upper_end;
     /// The first turbulent separation of the upper surface, x/c.
     std::optional<double> turbulent_separation_upper;
-    std::string model_warning;  ///< model_range_note of the point's case; empty when none
+    std::string model_warning;       ///< model_range_note of the point's case; empty when none
     std::optional<double> strouhal;  ///< f c / U_inf of the lift (unsteady points)
     double cl_amplitude = 0.0, cd_amplitude = 0.0, cm_amplitude = 0.0;  ///< half peak-to-peak
     int cycles = 0;       ///< whole cycles averaged over

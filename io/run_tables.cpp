@@ -13,18 +13,18 @@ namespace {
 std::string surface_rows(const std::vector<SurfacePoint>& side, const char* name) {
     std::string out;
     for (const SurfacePoint& p : side)
-        out += fmt::format("{:.8f},{:.8f},{},{:.8e},{:.8e},{:.6e},{}\n", p.x, p.y, name, p.cp,
-                           p.cf, p.y_plus,
-                           std::isfinite(p.turbulence_index)
-                               ? fmt::format("{:.6e}", p.turbulence_index)
-                               : std::string());  // empty: no nu~ (a laminar model)
+        out += fmt::format(
+            "{:.8f},{:.8f},{},{:.8e},{:.8e},{:.6e},{}\n", p.x, p.y, name, p.cp, p.cf, p.y_plus,
+            std::isfinite(p.turbulence_index) ? fmt::format("{:.6e}", p.turbulence_index)
+                                              : std::string());  // empty: no nu~ (a laminar model)
     return out;
 }
 
 }  // namespace
 
 void write_surface_csv(const std::filesystem::path& path, const SurfaceDistribution& d) {
-    write_text_atomically(path, "x_c,y_c,side,cp,cf,y_plus,turbulence_index\n" + surface_rows(d.lower, "lower") +
+    write_text_atomically(path, "x_c,y_c,side,cp,cf,y_plus,turbulence_index\n" +
+                                    surface_rows(d.lower, "lower") +
                                     surface_rows(d.upper, "upper"));
 }
 

@@ -1,8 +1,9 @@
 #pragma once
 /// The post-processing of a run's fields in one call: the surface route (forces, Cp, Cf, y+),
-/// separation, transition and the kind of each separated region, the Kutta check, the control-volume and circulation routes on the requested
-/// contours side by side with the surface route, and the wake profiles. The run report, the
-/// closing table and the sweep records all read this one result.
+/// separation, transition and the kind of each separated region, the Kutta check, the
+/// control-volume and circulation routes on the requested contours side by side with the surface
+/// route, and the wake profiles. The run report, the closing table and the sweep records all read
+/// this one result.
 #include <optional>
 #include <vector>
 

@@ -4,9 +4,12 @@ namespace veer {
 
 std::string kind_words(SeparationKind kind) {
     switch (kind) {
-        case SeparationKind::laminar_bubble: return "laminar bubble";
-        case SeparationKind::laminar_separation: return "laminar separation";
-        case SeparationKind::turbulent_separation: return "turbulent separation";
+        case SeparationKind::laminar_bubble:
+            return "laminar bubble";
+        case SeparationKind::laminar_separation:
+            return "laminar separation";
+        case SeparationKind::turbulent_separation:
+            return "turbulent separation";
     }
     return "";
 }

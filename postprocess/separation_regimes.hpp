@@ -27,8 +27,8 @@ std::string kind_words(SeparationKind kind);
 /// One region of reversed flow on one surface.
 struct SeparatedRegion {
     SeparationKind kind = SeparationKind::laminar_bubble;
-    SurfaceLocation start;                     ///< separation
-    std::optional<SurfaceLocation> end;        ///< reattachment; none: reversed to the trailing edge
+    SurfaceLocation start;               ///< separation
+    std::optional<SurfaceLocation> end;  ///< reattachment; none: reversed to the trailing edge
     std::optional<SurfaceLocation> transition;  ///< the surface's transition when inside the region
 };
 

@@ -1,0 +1,109 @@
+// What a user reads of transition: the model warning by Reynolds number, the closing table's
+// transition lines, and summary.json / surface.csv of a short Spalart–Allmaras run.
+#include <gtest/gtest.h>
+
+#include <cmath>
+#include <cstdio>
+#include <sstream>
+#include <string>
+
+#include "app/closing_table.hpp"
+#include "app/mesh_pipeline.hpp"
+#include "app/model_range_note.hpp"
+#include "app/run_report.hpp"
+#include "app/simulation.hpp"
+#include "app/transition_figures.hpp"
+#include "app_test_support.hpp"
+#include "io/case_file.hpp"
+#include "io/json_writer.hpp"
+
+namespace veer {
+namespace {
+
+TEST(ModelRangeNote, LaminarAboveItsRangeNamesTheAlternative) {
+    const auto note = model_range_note("laminar", 2.0e5, false);
+    ASSERT_TRUE(note.has_value());
+    EXPECT_NE(note->find("5e4"), std::string::npos) << *note;
+    EXPECT_NE(note->find("common practice"), std::string::npos) << *note;
+    EXPECT_NE(note->find("model = \""), std::string::npos) << *note;  // names what to use
+    EXPECT_FALSE(model_range_note("laminar", 4.0e4, false).has_value());
+    EXPECT_FALSE(model_range_note("laminar", laminar_reynolds_limit, false).has_value());
+}
+
+TEST(ModelRangeNote, FullyTurbulentBelowItsRangeUnlessTripped) {
+    const auto note = model_range_note("spalart-allmaras", 2.5e5, false);
+    ASSERT_TRUE(note.has_value());
+    EXPECT_NE(note->find("1e6"), std::string::npos) << *note;
+    EXPECT_FALSE(model_range_note("spalart-allmaras", 2.5e5, true).has_value());
+    EXPECT_FALSE(model_range_note("spalart-allmaras", 3.0e6, false).has_value());
+    EXPECT_FALSE(model_range_note("spalart-allmaras", fully_turbulent_reynolds_limit, false));
+}
+
+TEST(TransitionFigures, ClosingTableStatesTransitionAndTheBubble) {
+    RunAnalysis a;
+    a.has_turbulence_index = true;
+    a.transition.upper = SurfaceLocation{SurfaceSide::upper, 0.35, 0.35, 0.05};
+    SeparatedRegion b;
+    b.kind = SeparationKind::laminar_bubble;
+    b.start = {SurfaceSide::upper, 0.3, 0.3, 0.05};
+    b.end = SurfaceLocation{SurfaceSide::upper, 0.4, 0.4, 0.05};
+    b.transition = a.transition.upper;
+    a.regions_upper.push_back(b);
+    CaseSpec spec;
+    testing::internal::CaptureStdout();
+    print_closing_table(spec, a);
+    std::fflush(stdout);
+    const std::string out = testing::internal::GetCapturedStdout();
+    EXPECT_NE(out.find("upper x/c 0.350, lower laminar to the trailing edge"), std::string::npos)
+        << out;
+    EXPECT_NE(out.find("laminar bubble 0.300-0.400 (transition 0.350 inside)"), std::string::npos)
+        << out;
+    const nlohmann::json s = transition_summary(a);
+    EXPECT_DOUBLE_EQ(s.at("transition_upper").get<double>(), 0.35);
+    EXPECT_TRUE(s.at("transition_lower").is_null());
+    ASSERT_EQ(s.at("laminar_bubbles_upper").size(), 1u);
+    EXPECT_DOUBLE_EQ(s.at("laminar_bubbles_upper")[0][1].get<double>(), 0.35);
+}
+
+TEST(TransitionFigures, LaminarRunHasNoTransitionLine) {
+    RunAnalysis a;  // no turbulence index
+    EXPECT_TRUE(transition_line(a).empty());
+}
+
+/// A short fully turbulent run at Re 2.5e5 on a small grid: nu~ is there, so every wall face
+/// has a turbulence index and each surface a transition position near the leading edge.
+TEST(TransitionFigures, SpalartAllmarasRunWritesTheIndexAndTheTransition) {
+    test::AppScratch scratch;
+    const CaseSpec spec = parse_case_text(
+        "[geometry]\nnaca = \"0012\"\n[mesh]\naround = 96\nnormal = 40\nwake = 24\n"
+        "far_field = 20\ny_plus = 1.0\n[flow]\nreynolds = 2.5e5\nalpha = 2\n"
+        "model = \"spalart-allmaras\"\n[run]\nmode = \"steady\"\nsteps = 150\n",
+        "sa.toml", ".");
+    SimulationOptions quiet;
+    quiet.progress = false;
+    Simulation sim(spec, build_mesh(spec).grid, scratch.path(), quiet);
+    const RunResult r = sim.run();
+    ASSERT_TRUE(write_run_report(sim, r, ClosingTable::omit, nullptr).has_value());
+    const nlohmann::json s = read_json_file(scratch / "summary.json");
+    ASSERT_TRUE(s.at("transition_upper").is_number()) << s.dump();
+    ASSERT_TRUE(s.at("transition_lower").is_number()) << s.dump();
+    // Fully turbulent: the index rises within the first tenth of the chord on both surfaces.
+    EXPECT_GE(s["transition_upper"].get<double>(), 0.0);
+    EXPECT_LT(s["transition_upper"].get<double>(), 0.1);
+    EXPECT_LT(s["transition_lower"].get<double>(), 0.1);
+    EXPECT_TRUE(s.at("model_warning").is_string());  // SA at Re 2.5e5 untripped
+    std::istringstream csv(test::read_text(scratch / "surface.csv"));
+    std::string line;
+    std::getline(csv, line);
+    ASSERT_EQ(line, "x_c,y_c,side,cp,cf,y_plus,turbulence_index");
+    // Every row ends in a number: no empty index cell on a Spalart–Allmaras run.
+    std::size_t rows = 0;
+    for (; std::getline(csv, line); ++rows) {
+        const std::string last = line.substr(line.rfind(',') + 1);
+        EXPECT_TRUE(std::isfinite(std::stod(last))) << line;
+    }
+    EXPECT_EQ(rows, 96u);  // one per wall face
+}
+
+}  // namespace
+}  // namespace veer
