@@ -6,6 +6,7 @@
 
 #include "app/report_csv.hpp"
 #include "app/report_pictures.hpp"
+#include "app/report_transition.hpp"
 #include "io/plot_chart.hpp"
 #include "io/plot_flow_picture.hpp"
 #include "mesh/errors.hpp"
@@ -90,7 +91,10 @@ void draw_surface(const fs::path& surface, const fs::path& file, const std::stri
     c.y_reversed = pressure;
     c.series = {side_series(t, "upper", value, "upper surface", 0),
                 side_series(t, "lower", value, "lower surface", 1)};
-    if (!pressure) c.series.push_back({"", {0.0, 1.0}, {0.0, 0.0}, true, false, true, 4});
+    if (!pressure) {
+        mark_transition_on_cf(c, surface.parent_path() / "summary.json");
+        c.series.push_back({"", {0.0, 1.0}, {0.0, 0.0}, true, false, true, 4});
+    }
     write_chart(c, file);
 }
 

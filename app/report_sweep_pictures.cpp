@@ -8,6 +8,7 @@
 #include "app/reader_labels.hpp"
 #include "app/report_csv.hpp"
 #include "app/report_pictures.hpp"
+#include "app/report_transition.hpp"
 #include "io/plot_chart.hpp"
 #include "mesh/errors.hpp"
 
@@ -146,6 +147,11 @@ PictureSet draw_sweep_pictures(const fs::path& sweep_dir, const std::vector<Poin
         [&](const fs::path& file) { draw_all_surfaces(sweep_dir, p, file, true); });
     add("sweep_cf.png", "Cf at each angle (final fields of each point)",
         [&](const fs::path& file) { draw_all_surfaces(sweep_dir, p, file, false); });
+    if (std::any_of(p.begin(), p.end(),
+                    [](const PointRecord& r) { return r.transition_upper || r.transition_lower; }))
+        add("sweep_transition.png",
+            "Transition positions and laminar bubbles against angle of attack",
+            [&](const fs::path& file) { draw_transition_positions(p, f, file); });
     return set;
 }
 

@@ -10,6 +10,7 @@
 #include "app/closing_table.hpp"
 #include "app/mesh_pipeline.hpp"
 #include "app/model_range_note.hpp"
+#include "app/report_transition.hpp"
 #include "app/run_report.hpp"
 #include "app/simulation.hpp"
 #include "app/transition_figures.hpp"
@@ -103,6 +104,62 @@ TEST(TransitionFigures, SpalartAllmarasRunWritesTheIndexAndTheTransition) {
         EXPECT_TRUE(std::isfinite(std::stod(last))) << line;
     }
     EXPECT_EQ(rows, 96u);  // one per wall face
+}
+
+ChartSeries ramp(const std::string& label) {
+    ChartSeries s;
+    s.label = label;
+    for (int k = 0; k <= 10; ++k) s.x.push_back(0.1 * k), s.y.push_back(0.01);
+    return s;
+}
+
+TEST(TransitionPictures, CfIsSplitAtTransitionWithTheBubbleDrawn) {
+    test::AppScratch scratch;
+    test::write_text(scratch / "summary.json",
+                     R"({"model": "sa-aft", "transition_upper": 0.35, "transition_lower": null,
+                         "laminar_bubbles_upper": [[0.3, 0.35, 0.4]], "laminar_bubbles_lower": []})");
+    Chart c;
+    c.series = {ramp("upper"), ramp("lower")};
+    mark_transition_on_cf(c, scratch / "summary.json");
+    // upper laminar + upper turbulent + the bubble + lower laminar (no transition there).
+    ASSERT_EQ(c.series.size(), 4u);
+    EXPECT_EQ(c.series[0].label, "upper surface, laminar");
+    EXPECT_TRUE(c.series[0].dashed);
+    EXPECT_DOUBLE_EQ(c.series[0].x.back(), 0.3);  // the points ahead of 0.35
+    EXPECT_EQ(c.series[1].label, "upper surface, turbulent");
+    EXPECT_FALSE(c.series[1].dashed);
+    EXPECT_DOUBLE_EQ(c.series[1].x.front(), 0.4);
+    EXPECT_EQ(c.series[2].label, "laminar bubble, upper");
+    EXPECT_EQ(c.series[2].x, (std::vector<double>{0.3, 0.4}));
+    EXPECT_EQ(c.series[3].label, "lower surface, laminar");
+    EXPECT_EQ(c.series[3].x.size(), 11u);
+    ASSERT_EQ(c.marks.size(), 1u);
+    EXPECT_EQ(c.marks[0].label, "transition upper 0.35");
+}
+
+TEST(TransitionPictures, LaminarRunCfIsLeftAlone) {
+    test::AppScratch scratch;
+    test::write_text(scratch / "summary.json",
+                     R"({"model": "laminar", "transition_upper": null, "transition_lower": null})");
+    Chart c;
+    c.series = {ramp("upper"), ramp("lower")};
+    mark_transition_on_cf(c, scratch / "summary.json");
+    ASSERT_EQ(c.series.size(), 2u);
+    EXPECT_EQ(c.series[0].label, "upper");
+    EXPECT_TRUE(c.marks.empty());
+}
+
+TEST(TransitionPictures, SweepPictureOfTransitionAgainstAlpha) {
+    test::AppScratch scratch;
+    std::vector<PointRecord> p(3);
+    for (int k = 0; k < 3; ++k) p[k].alpha = 4.0 * k;
+    EXPECT_THROW(draw_transition_positions(p, PolarFigures{}, scratch / "t.png"), InputError);
+    p[0].transition_upper = 0.5;
+    p[1].transition_upper = 0.3;
+    p[1].laminar_bubble_upper = 0.25;
+    p[1].laminar_bubble_upper_end = 0.32;
+    draw_transition_positions(p, PolarFigures{}, scratch / "t.png");
+    EXPECT_TRUE(test::is_png(scratch / "t.png"));
 }
 
 }  // namespace
