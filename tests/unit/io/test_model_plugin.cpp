@@ -87,6 +87,12 @@ public:
         std::fill(on_j.begin(), on_j.end(), 0.0);
     }
     std::vector<NamedArray> values() const override { return {{scalar_name, m_q.interior()}}; }
+    /// A further output field (as a transition model's intermittency is): 1 - c.
+    std::vector<NamedArray> output_fields() const override {
+        std::vector<double> rest = m_q.interior();
+        for (double& x : rest) x = 1.0 - x;
+        return {{"passive_scalar_complement", rest}};
+    }
     void set_values(const std::vector<NamedArray>& arrays) override {
         for (const NamedArray& a : arrays)
             if (a.name == scalar_name) m_q.set_interior(a.values);
@@ -243,6 +249,14 @@ TEST(ModelPlugin, ATestOnlyModelStepsRestartsAndReachesEveryOutput) {
     const std::vector<double> frame = last_frame_array(scratch / "straight", scalar_name);
     ASSERT_EQ(frame.size(), field->values.size());
     EXPECT_TRUE(same_bits(frame, field->values));
+    // And the model's further output field, after its variables.
+    const NamedArray* extra = array_named(fields.model_fields, "passive_scalar_complement");
+    ASSERT_NE(extra, nullptr);
+    const std::vector<double> extra_frame =
+        last_frame_array(scratch / "straight", "passive_scalar_complement");
+    ASSERT_EQ(extra_frame.size(), field->values.size());
+    EXPECT_TRUE(same_bits(extra_frame, extra->values));
+    EXPECT_DOUBLE_EQ(extra_frame.front(), 1.0 - frame.front());
 }
 
 }  // namespace
