@@ -5,6 +5,7 @@
 #include <cmath>
 
 #include "solver/model_registry.hpp"
+#include "solver/transition_options.hpp"
 
 namespace veer {
 namespace {
@@ -48,8 +49,9 @@ std::optional<std::string> model_range_note(const std::string& model, double rey
 }
 
 std::optional<std::string> model_range_note(const CaseSpec& spec) {
-    // Trips are [flow] keys of the transition-capable models; none exist in this build yet.
-    const bool tripped = false;
+    // A trip on either surface ([flow] trip_upper / trip_lower, solver/transition_options.hpp).
+    const ModelOptions& o = spec.model.options;
+    const bool tripped = o.count(trip_upper_key) > 0 || o.count(trip_lower_key) > 0;
     return model_range_note(spec.model.name, spec.flow.reynolds, tripped);
 }
 

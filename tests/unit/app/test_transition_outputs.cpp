@@ -40,6 +40,16 @@ TEST(ModelRangeNote, FullyTurbulentBelowItsRangeUnlessTripped) {
     EXPECT_FALSE(model_range_note("spalart-allmaras", fully_turbulent_reynolds_limit, false));
 }
 
+TEST(ModelRangeNote, ACaseWithATripIsNotWarned) {
+    const std::string base =
+        "[geometry]\nnaca = \"0012\"\n[mesh]\naround = 32\nnormal = 8\nwake = 8\n"
+        "far_field = 10\nfirst_cell = 1e-3\n[flow]\nreynolds = 5e5\nalpha = 0\n"
+        "model = \"spalart-allmaras\"\n";
+    EXPECT_TRUE(model_range_note(parse_case_text(base, "a.toml", ".")).has_value());
+    EXPECT_FALSE(
+        model_range_note(parse_case_text(base + "trip_upper = 0.05\n", "b.toml", ".")).has_value());
+}
+
 TEST(TransitionFigures, ClosingTableStatesTransitionAndTheBubble) {
     RunAnalysis a;
     a.has_turbulence_index = true;
