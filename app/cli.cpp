@@ -1,17 +1,39 @@
 #include "app/cli.hpp"
 
 #include <CLI/CLI.hpp>
+#include <filesystem>
 #include <iostream>
 
 #include "app/commands.hpp"
+#include "app/error_line.hpp"
 #include "app/reader_labels.hpp"
 #include "mesh/errors.hpp"
 
 namespace veer {
 namespace {
 
+/// Exit statuses (README, "Exit status"): 2 bad input or an output problem the user can fix,
+/// 3 a fault inside veer.
+constexpr int exit_input = 2;
+constexpr int exit_internal = 3;
+
+int print_error(const std::string& prefix, const std::string& message, int code) {
+    std::cerr << one_line(prefix + message, error_line_limit) << "\n";
+    return code;
+}
+
+/// The argument parser's own verdicts: help and version print and exit 0; every mistake in the
+/// arguments is bad input (exit 2, one line), whatever code the parser would give.
+int parser_exit(CLI::App& app, const CLI::ParseError& e) {
+    if (e.get_exit_code() == 0) return app.exit(e);
+    return print_error("veer: error: ", std::string(e.what()) + " (run `veer --help`)",
+                       exit_input);
+}
+
 void add_case_options(CLI::App& sub, CaseOptions& o) {
-    sub.add_option("case", o.case_file, "case file (TOML)")->required()->check(CLI::ExistingFile);
+    // No existence check here: the case reader refuses a missing path, a folder or a device with
+    // a message that says what was expected (io/input_file.hpp).
+    sub.add_option("case", o.case_file, "case file (TOML)")->required();
     sub.add_option("--set", o.overrides,
                    "override a case value, e.g. --set flow.alpha=6 (repeatable)")
         ->type_name("TABLE.KEY=VALUE");
@@ -78,7 +100,7 @@ int run_cli(int argc, char** argv) {
     RunOptions run_opts;
     CLI::App* run = app.add_subcommand("run", "solve the flow of a case");
     run->footer(std::string(reader_caution()) + ".");
-    run->add_option("case", run_opts.input.case_file, "case file (TOML)")->check(CLI::ExistingFile);
+    run->add_option("case", run_opts.input.case_file, "case file (TOML)");
     run->add_option("--set", run_opts.input.overrides, "override a case value (repeatable)")
         ->type_name("TABLE.KEY=VALUE");
     run->add_option("-o,--output", run_opts.out_dir,
@@ -99,7 +121,7 @@ int run_cli(int argc, char** argv) {
     try {
         app.parse(argc, argv);
     } catch (const CLI::ParseError& e) {
-        return app.exit(e);
+        return parser_exit(app, e);
     }
     try {
         if (*check) return run_check_command(check_opts);
@@ -114,11 +136,14 @@ int run_cli(int argc, char** argv) {
             return run_run_command(run_opts);
         }
     } catch (const InputError& e) {
-        std::cerr << "veer: error: " << e.what() << "\n";
-        return 2;
+        return print_error("veer: error: ", e.what(), exit_input);
+    } catch (const std::filesystem::filesystem_error& e) {
+        // A path the user gave that the system refuses (too long, no permission, a full disk).
+        return print_error("veer: error: ", e.what(), exit_input);
+    } catch (const std::bad_alloc&) {
+        return print_error("veer: error: ", "out of memory; try a coarser grid", exit_input);
     } catch (const std::exception& e) {
-        std::cerr << "veer: internal error: " << e.what() << "\n";
-        return 3;
+        return print_error("veer: internal error: ", e.what(), exit_internal);
     }
     return 0;
 }

@@ -16,6 +16,7 @@ extern "C" void on_interrupt(int signal) {
 void install_interrupt_handlers() {
     std::signal(SIGINT, on_interrupt);
     std::signal(SIGTERM, on_interrupt);
+    std::signal(SIGHUP, on_interrupt);  // a closed terminal or ssh session: keep the work too
 }
 
 bool interrupt_requested() { return g_interrupted != 0; }

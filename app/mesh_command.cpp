@@ -101,7 +101,7 @@ void write_mesh_files(const std::filesystem::path& dir, const MeshBuild& m) {
 int run_mesh_command(const MeshOptions& o) {
     const CaseSpec spec = read_case_file(o.input.case_file, o.input.overrides);
     const MeshBuild mesh = build_mesh(spec);
-    prepare_output_dir(o.out_dir, spec.text, o.force);
+    const FolderLock lock = prepare_output_dir(o.out_dir, spec.text, o.force);
     write_mesh_files(o.out_dir, mesh);
     print_mesh_table(mesh);
     fmt::print("wrote {}/mesh.vts, surface.vtp, mesh.json\n", o.out_dir.string());

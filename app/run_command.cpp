@@ -86,7 +86,7 @@ int run_run_command(const RunOptions& o) {
     // A restart writes into its own run folder whatever the overrides did to the case text.
     std::error_code ec;
     const bool own_folder = checkpoint && std::filesystem::equivalent(out, restart_dir, ec);
-    prepare_output_dir(out, spec.text, o.force || own_folder);
+    const FolderLock lock = prepare_output_dir(out, spec.text, o.force || own_folder);
 
     StructuredGrid grid;
     std::optional<Section> header_section;  // a restart keeps the section.json of its first run

@@ -5,6 +5,7 @@
 
 #include <chrono>
 #include <cmath>
+#include <optional>
 
 #include "app/commands.hpp"
 #include "app/mesh_pipeline.hpp"
@@ -142,8 +143,9 @@ int run_sweep(const SweepOptions& o, const SweepRanks& ranks) {
                     o.steady_steps, o.unsteady_time, !o.quiet};
     const CaseSpec base = parse_case_source(sweep.source, sweep.overrides);
     sweep.stability_time = o.stability_time;
+    std::optional<FolderLock> lock;  // the root holds the sweep folder for the whole sweep
     if (ranks.is_root()) {
-        prepare_output_dir(o.out_dir, base.text, o.force);
+        lock.emplace(prepare_output_dir(o.out_dir, base.text, o.force));
         write_sweep_plan(o.out_dir, {sweep.source.path, sweep.overrides, angles, o.steady_steps,
                                      o.unsteady_time, ranks.size()});
     }

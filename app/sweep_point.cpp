@@ -116,7 +116,9 @@ using StopHook = decltype(SimulationOptions::stop_early);
 RunPiece run_piece(const CaseSpec& spec, const StructuredGrid& grid, const fs::path& dir,
                    const FlowFields* start, const SweepCase& sweep, const std::string& label,
                    StopHook stop_early = {}, const Simulation** running = nullptr) {
-    prepare_output_dir(dir, spec.text, false);
+    // Not held: the sweep folder's lock (taken by the root rank) already keeps other sweeps out,
+    // and a point's pieces reopen the same folder one after another.
+    (void)prepare_output_dir(dir, spec.text, false);
     SimulationOptions options;
     options.progress = sweep.progress;
     options.label = label;

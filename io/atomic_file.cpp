@@ -12,9 +12,22 @@ namespace veer {
 namespace fs = std::filesystem;
 
 fs::path temporary_path_for(const fs::path& target) {
-    fs::path tmp = target;
-    tmp += ".tmp";
-    return tmp;
+    std::string name = target.filename().string();
+    name.append(".").append(std::to_string(::getpid())).append(".tmp");
+    return target.parent_path() / name;
+}
+
+bool is_stale_temporary(const fs::path& file) {
+    const std::string name = file.filename().string();
+    const std::string end = ".tmp";
+    if (name.size() <= end.size() || name.compare(name.size() - end.size(), end.size(), end) != 0)
+        return false;
+    const std::string stem = name.substr(0, name.size() - end.size());
+    const std::size_t dot = stem.rfind('.');
+    if (dot == std::string::npos || dot + 1 == stem.size()) return false;
+    const std::string pid = stem.substr(dot + 1);
+    if (pid.find_first_not_of("0123456789") != std::string::npos) return false;
+    return pid != std::to_string(::getpid());
 }
 
 namespace {

@@ -10,6 +10,7 @@
 #include <sstream>
 
 #include "io/case_choices.hpp"
+#include "io/input_file.hpp"
 #include "mesh/errors.hpp"
 #include "solver/model_registry.hpp"
 
@@ -391,11 +392,11 @@ CaseSpec parse_case_text(const std::string& text, const std::string& source,
 }
 
 CaseSource read_case_source(const std::filesystem::path& path) {
-    std::ifstream in(path, std::ios::binary);
-    if (!in) throw InputError(path.string() + ": cannot open the case file");
-    std::ostringstream s;
-    s << in.rdbuf();
-    return {path, s.str()};
+    std::string text = read_input_file(path, "case file", case_file_cap);
+    // Files saved with old Mac line ends (a lone CR) read as one line otherwise; TOML wants LF.
+    for (std::size_t at = 0; at < text.size(); ++at)
+        if (text[at] == '\r' && (at + 1 == text.size() || text[at + 1] != '\n')) text[at] = '\n';
+    return {path, std::move(text)};
 }
 
 CaseSpec parse_case_source(const CaseSource& source, const std::vector<std::string>& overrides) {

@@ -1,6 +1,7 @@
 #include "io/checkpoint.hpp"
 
 #include <array>
+#include <optional>
 #include <set>
 #include <string_view>
 #include <system_error>
@@ -136,7 +137,8 @@ void check_names(const CheckpointData& data) {
 }
 
 void write_file(const fs::path& tmp, const CheckpointData& data) {
-    Handle file(H5Fcreate(tmp.c_str(), H5F_ACC_TRUNC, H5P_DEFAULT, H5P_DEFAULT), H5Fclose,
+    Handle access = hdf5::checksummed_file_access();
+    Handle file(H5Fcreate(tmp.c_str(), H5F_ACC_TRUNC, H5P_DEFAULT, access.get()), H5Fclose,
                 "cannot create " + tmp.string());
     {
         Handle veer = hdf5::create_group(file.get(), "veer");
@@ -169,6 +171,8 @@ CheckpointData read_layout(hid_t file, const fs::path& path) {
         throw InputError(path.string() + ": checkpoint format version " + std::to_string(version) +
                          "; this build reads versions 1 to " +
                          std::to_string(checkpoint_format_version));
+    std::optional<hdf5::RequireChecksums> checked;
+    if (version >= 2) checked.emplace();  // every dataset of version 2 carries its checksum
     CheckpointData data;
     data.step = hdf5::read_int_attribute(veer.get(), "step");
     data.time = hdf5::read_double_attribute(veer.get(), "time");
@@ -207,7 +211,8 @@ CheckpointData read_checkpoint(const fs::path& path) {
     if (H5Fis_hdf5(path.c_str()) <= 0)
         throw InputError(path.string() + ": not an HDF5 file; expected a veer checkpoint");
     try {
-        Handle file(H5Fopen(path.c_str(), H5F_ACC_RDONLY, H5P_DEFAULT), H5Fclose,
+        Handle access = hdf5::strict_file_access();
+        Handle file(H5Fopen(path.c_str(), H5F_ACC_RDONLY, access.get()), H5Fclose,
                     "cannot open the file");
         return read_layout(file.get(), path);
     } catch (const hdf5::Hdf5Error& e) {

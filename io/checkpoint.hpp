@@ -1,6 +1,6 @@
 #pragma once
 /// HDF5 checkpoint of a run: the mesh, the case text, the clock and named scalars, and the solver's
-/// state as named double arrays. Read back bit for bit. Layout (format version 1):
+/// state as named double arrays. Read back bit for bit. Layout (format version 2):
 ///
 ///   /veer                 attrs: format = "veer checkpoint", format_version, step, time
 ///   /veer/case_text       the case file text (variable-length UTF-8 string)
@@ -9,6 +9,11 @@
 ///     segment_side, segment_kind, segment_name (strings), segment_begin, segment_end (int64)
 ///   /veer/scalars         one double attribute per named scalar
 ///   /veer/state/<name>    1-D doubles, in the order given (creation order is kept)
+///
+/// Version 2 adds integrity checks: every dataset has an int64 attribute "checksum" (FNV-1a of
+/// its values, io/hdf5_support.hpp) checked on reading, and the file is written in the HDF5 1.8
+/// format or later, whose object headers carry HDF5's own checksums (attributes included).
+/// Version 1 files (no checksums) are still read.
 #include <cstdint>
 #include <filesystem>
 #include <map>
@@ -21,7 +26,7 @@
 namespace veer {
 
 /// The checkpoint format this build writes and the newest it reads.
-inline constexpr std::int64_t checkpoint_format_version = 1;
+inline constexpr std::int64_t checkpoint_format_version = 2;
 
 /// Everything a restart needs.
 struct CheckpointData {

@@ -4,12 +4,12 @@
 
 #include <charconv>
 #include <cmath>
-#include <fstream>
 #include <optional>
 #include <string>
 #include <vector>
 
 #include "io/coordinate_layout.hpp"
+#include "io/input_file.hpp"
 #include "mesh/errors.hpp"
 
 namespace veer {
@@ -45,10 +45,12 @@ std::optional<Vec2> parse_pair(const std::string& line) {
 }
 
 /// The lines of a file, split at LF, CRLF or a lone CR.
-std::vector<std::string> file_lines(std::istream& in) {
+std::vector<std::string> file_lines(const std::string& text) {
     std::vector<std::string> lines(1);
-    for (char c; in.get(c);) {
-        if (c == '\r' && in.peek() == '\n') continue;  // CRLF: the LF ends the line
+    for (std::size_t at = 0; at < text.size(); ++at) {
+        const char c = text[at];
+        if (c == '\r' && at + 1 < text.size() && text[at + 1] == '\n')
+            continue;  // CRLF: the LF ends the line
         if (c == '\n' || c == '\r')
             lines.emplace_back();
         else
@@ -61,12 +63,11 @@ std::vector<std::string> file_lines(std::istream& in) {
 
 RawOutline read_coordinate_file(const std::filesystem::path& path) {
     const std::string name = path.string();
-    std::ifstream in(path, std::ios::binary);
-    if (!in) throw InputError(name + ": cannot open");
+    const std::string text_of_file = read_input_file(path, "coordinate file", coordinate_file_cap);
     FileBlocks b{name, {}};
     bool title_allowed = true, had_title = false, gap = true;
     int number = 0;
-    for (const std::string& line : file_lines(in)) {
+    for (const std::string& line : file_lines(text_of_file)) {
         ++number;
         const std::string text = trim(line);
         if (text.empty()) {

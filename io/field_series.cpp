@@ -8,6 +8,7 @@
 #include <sstream>
 
 #include "io/atomic_file.hpp"
+#include "io/input_file.hpp"
 #include "io/markup_escape.hpp"
 #include "mesh/errors.hpp"
 #include "postprocess/vorticity.hpp"
@@ -50,11 +51,7 @@ std::string attribute(const std::string& tag, const std::string& name) {
 }  // namespace
 
 std::vector<SeriesFrame> read_pvd(const fs::path& path) {
-    std::ifstream in(path, std::ios::binary);
-    if (!in) throw InputError(path.string() + ": cannot open the frame list");
-    std::ostringstream s;
-    s << in.rdbuf();
-    const std::string text = s.str();
+    const std::string text = read_input_file(path, "frame list", record_file_cap);
     if (text.find("<Collection") == std::string::npos)
         throw InputError(path.string() +
                          ": not a VTK collection file (no <Collection>); move it away or start "

@@ -1,8 +1,25 @@
 #include "io/hdf5_support.hpp"
 
+#include "io/checksum.hpp"
+
+#include <algorithm>
+#include <cstring>
+
 namespace veer::hdf5 {
 
 namespace {
+
+thread_local bool checksums_required = false;
+
+// No clean-up of HDF5 at exit: after a damaged file or a full disk the library keeps internal
+// blocks its error paths never free, and its exit handler then loops ("infinite loop closing
+// library", a page of letters on stderr) or crashes (exit 139 after a failed checkpoint write).
+// veer closes every file it opens itself (strong close), so there is nothing left to flush, and
+// the system frees the memory. Must run before the library starts: a static initializer.
+const bool no_exit_handler = [] {
+    H5dont_atexit();
+    return true;
+}();
 
 hid_t check(hid_t id, const std::string& what) {
     if (id < 0) throw Hdf5Error(what);
@@ -18,6 +35,30 @@ Handle vl_string_type() {
     check_status(H5Tset_size(t.get(), H5T_VARIABLE), "string type");
     check_status(H5Tset_cset(t.get(), H5T_CSET_UTF8), "string type");
     return t;
+}
+
+/// A fixed-length string type of `size` bytes (at least 1), padded with NULs. Fixed-length strings
+/// live in the object header (attributes) or the dataset's own data, where checksums cover them;
+/// variable-length ones live in HDF5's global heap, which has no checksum and whose damaged
+/// entries crash the library's reader (found by flipping bytes of a checkpoint).
+Handle fixed_string_type(std::size_t size) {
+    Handle t(H5Tcopy(H5T_C_S1), H5Tclose, "string type");
+    check_status(H5Tset_size(t.get(), std::max<std::size_t>(size, 1)), "string type");
+    check_status(H5Tset_strpad(t.get(), H5T_STR_NULLPAD), "string type");
+    check_status(H5Tset_cset(t.get(), H5T_CSET_UTF8), "string type");
+    return t;
+}
+
+/// `count` fixed-length strings of `size` bytes each, NUL padding removed.
+std::vector<std::string> split_fixed(const std::vector<char>& bytes, std::size_t count,
+                                     std::size_t size) {
+    std::vector<std::string> out;
+    for (std::size_t k = 0; k < count; ++k) {
+        std::string s(bytes.data() + k * size, size);
+        s.erase(s.find_last_not_of('\0') + 1);
+        out.push_back(s);
+    }
+    return out;
 }
 
 Handle scalar_space() { return Handle(H5Screate(H5S_SCALAR), H5Sclose, "dataspace"); }
@@ -68,7 +109,36 @@ T read_attribute_of(hid_t object, const std::string& name, hid_t mem_type, H5T_c
     return value;
 }
 
+void verify_checksum(hid_t dataset, const std::string& name, std::int64_t computed) {
+    if (!has_attribute(dataset, checksum_attribute)) {
+        if (checksums_required) throw Hdf5Error("dataset '" + name + "' has no checksum");
+        return;
+    }
+    if (read_int_attribute(dataset, checksum_attribute) != computed)
+        throw Hdf5Error("dataset '" + name +
+                        "' does not match its checksum (the file was changed or damaged)");
+}
+
 }  // namespace
+
+RequireChecksums::RequireChecksums() : m_previous(checksums_required) {
+    checksums_required = true;
+}
+
+RequireChecksums::~RequireChecksums() { checksums_required = m_previous; }
+
+Handle checksummed_file_access() {
+    Handle fapl = strict_file_access();
+    check_status(H5Pset_libver_bounds(fapl.get(), H5F_LIBVER_V18, H5F_LIBVER_LATEST),
+                 "file format bounds");
+    return fapl;
+}
+
+Handle strict_file_access() {
+    Handle fapl(H5Pcreate(H5P_FILE_ACCESS), H5Pclose, "file access properties");
+    check_status(H5Pset_fclose_degree(fapl.get(), H5F_CLOSE_STRONG), "file close degree");
+    return fapl;
+}
 
 Handle::Handle(hid_t id, Closer closer, const std::string& what)
     : m_id(check(id, what)), m_closer(closer) {}
@@ -114,9 +184,13 @@ bool has_attribute(hid_t object, const std::string& name) {
 }
 
 void write_attribute(hid_t object, const std::string& name, const std::string& value) {
-    Handle t = vl_string_type();
-    const char* c = value.c_str();
-    write_attribute_of(object, name, t.get(), t.get(), c);
+    Handle t = fixed_string_type(value.size());
+    Handle space = scalar_space();
+    Handle a(H5Acreate2(object, name.c_str(), t.get(), space.get(), H5P_DEFAULT, H5P_DEFAULT),
+             H5Aclose, "attribute '" + name + "'");
+    std::string padded = value;
+    padded.resize(std::max<std::size_t>(value.size(), 1), '\0');
+    check_status(H5Awrite(a.get(), t.get(), padded.data()), "attribute '" + name + "'");
 }
 
 void write_attribute(hid_t object, const std::string& name, std::int64_t value) {
@@ -130,8 +204,18 @@ void write_attribute(hid_t object, const std::string& name, double value) {
 std::string read_string_attribute(hid_t object, const std::string& name) {
     Handle a = open_attribute(object, name);
     Handle file_type(H5Aget_type(a.get()), H5Tclose, "attribute type");
-    if (H5Tget_class(file_type.get()) != H5T_STRING || H5Tis_variable_str(file_type.get()) <= 0)
-        throw Hdf5Error("attribute '" + name + "' is not a variable-length string");
+    if (H5Tget_class(file_type.get()) != H5T_STRING)
+        throw Hdf5Error("attribute '" + name + "' is not a string");
+    if (H5Tis_variable_str(file_type.get()) <= 0) {
+        const std::size_t size = H5Tget_size(file_type.get());
+        if (size == 0 || size > (1u << 20)) throw Hdf5Error("attribute '" + name + "' size");
+        Handle t = fixed_string_type(size);
+        std::vector<char> bytes(size);
+        check_status(H5Aread(a.get(), t.get(), bytes.data()), "attribute '" + name + "'");
+        return split_fixed(bytes, 1, size).front();
+    }
+    if (checksums_required)  // files with checksums write none: a damaged type, not a format
+        throw Hdf5Error("attribute '" + name + "' is a variable-length string");
     Handle t = vl_string_type();
     char* c = nullptr;
     check_status(H5Aread(a.get(), t.get(), &c), "attribute '" + name + "'");
@@ -170,6 +254,7 @@ void write_doubles(hid_t parent, const std::string& name, const std::vector<doub
     Handle d(H5Dcreate2(parent, name.c_str(), H5T_IEEE_F64LE, space.get(), H5P_DEFAULT, H5P_DEFAULT,
                         H5P_DEFAULT),
              H5Dclose, "dataset '" + name + "'");
+    write_attribute(d.get(), checksum_attribute, hash_of(values));
     if (values.empty()) return;
     check_status(H5Dwrite(d.get(), H5T_NATIVE_DOUBLE, H5S_ALL, H5S_ALL, H5P_DEFAULT, values.data()),
                  "dataset '" + name + "'");
@@ -181,9 +266,11 @@ std::vector<double> read_doubles(hid_t parent, const std::string& name,
     Handle t(H5Dget_type(d.get()), H5Tclose, "dataset type");
     if (H5Tget_class(t.get()) != H5T_FLOAT) throw Hdf5Error("dataset '" + name + "' is not float");
     std::vector<double> values(static_cast<std::size_t>(element_count(d.get(), dims)));
-    if (values.empty()) return values;
-    check_status(H5Dread(d.get(), H5T_NATIVE_DOUBLE, H5S_ALL, H5S_ALL, H5P_DEFAULT, values.data()),
-                 "dataset '" + name + "'");
+    if (!values.empty())
+        check_status(
+            H5Dread(d.get(), H5T_NATIVE_DOUBLE, H5S_ALL, H5S_ALL, H5P_DEFAULT, values.data()),
+            "dataset '" + name + "'");
+    verify_checksum(d.get(), name, hash_of(values));
     return values;
 }
 
@@ -192,6 +279,7 @@ void write_ints(hid_t parent, const std::string& name, const std::vector<std::in
     Handle d(H5Dcreate2(parent, name.c_str(), H5T_STD_I64LE, space.get(), H5P_DEFAULT, H5P_DEFAULT,
                         H5P_DEFAULT),
              H5Dclose, "dataset '" + name + "'");
+    write_attribute(d.get(), checksum_attribute, hash_of(values));
     if (values.empty()) return;
     check_status(H5Dwrite(d.get(), H5T_NATIVE_INT64, H5S_ALL, H5S_ALL, H5P_DEFAULT, values.data()),
                  "dataset '" + name + "'");
@@ -203,21 +291,16 @@ std::vector<std::int64_t> read_ints(hid_t parent, const std::string& name) {
     if (H5Tget_class(t.get()) != H5T_INTEGER)
         throw Hdf5Error("dataset '" + name + "' is not integer");
     std::vector<std::int64_t> values(static_cast<std::size_t>(element_count(d.get(), nullptr)));
-    if (values.empty()) return values;
-    check_status(H5Dread(d.get(), H5T_NATIVE_INT64, H5S_ALL, H5S_ALL, H5P_DEFAULT, values.data()),
-                 "dataset '" + name + "'");
+    if (!values.empty())
+        check_status(
+            H5Dread(d.get(), H5T_NATIVE_INT64, H5S_ALL, H5S_ALL, H5P_DEFAULT, values.data()),
+            "dataset '" + name + "'");
+    verify_checksum(d.get(), name, hash_of(values));
     return values;
 }
 
 void write_string(hid_t parent, const std::string& name, const std::string& value) {
-    Handle t = vl_string_type();
-    Handle space = scalar_space();
-    Handle d(H5Dcreate2(parent, name.c_str(), t.get(), space.get(), H5P_DEFAULT, H5P_DEFAULT,
-                        H5P_DEFAULT),
-             H5Dclose, "dataset '" + name + "'");
-    const char* c = value.c_str();
-    check_status(H5Dwrite(d.get(), t.get(), H5S_ALL, H5S_ALL, H5P_DEFAULT, &c),
-                 "dataset '" + name + "'");
+    write_strings(parent, name, {value});
 }
 
 std::string read_string(hid_t parent, const std::string& name) {
@@ -227,34 +310,55 @@ std::string read_string(hid_t parent, const std::string& name) {
 }
 
 void write_strings(hid_t parent, const std::string& name, const std::vector<std::string>& values) {
-    Handle t = vl_string_type();
+    std::size_t size = 1;
+    for (const std::string& s : values) size = std::max(size, s.size());
+    Handle t = fixed_string_type(size);
     Handle space = simple_space({static_cast<hsize_t>(values.size())});
     Handle d(H5Dcreate2(parent, name.c_str(), t.get(), space.get(), H5P_DEFAULT, H5P_DEFAULT,
                         H5P_DEFAULT),
              H5Dclose, "dataset '" + name + "'");
+    write_attribute(d.get(), checksum_attribute, hash_of(values));
     if (values.empty()) return;
-    std::vector<const char*> c;
-    c.reserve(values.size());
-    for (const std::string& s : values) c.push_back(s.c_str());
-    check_status(H5Dwrite(d.get(), t.get(), H5S_ALL, H5S_ALL, H5P_DEFAULT, c.data()),
+    std::vector<char> bytes(values.size() * size, '\0');
+    for (std::size_t k = 0; k < values.size(); ++k)
+        std::copy(values[k].begin(), values[k].end(), bytes.begin() + static_cast<long>(k * size));
+    check_status(H5Dwrite(d.get(), t.get(), H5S_ALL, H5S_ALL, H5P_DEFAULT, bytes.data()),
                  "dataset '" + name + "'");
 }
 
 std::vector<std::string> read_strings(hid_t parent, const std::string& name) {
     Handle d = open_dataset(parent, name);
     Handle file_type(H5Dget_type(d.get()), H5Tclose, "dataset type");
-    if (H5Tget_class(file_type.get()) != H5T_STRING || H5Tis_variable_str(file_type.get()) <= 0)
-        throw Hdf5Error("dataset '" + name + "' is not a variable-length string");
-    std::vector<char*> c(static_cast<std::size_t>(element_count(d.get(), nullptr)), nullptr);
-    if (c.empty()) return {};
-    Handle t = vl_string_type();
-    check_status(H5Dread(d.get(), t.get(), H5S_ALL, H5S_ALL, H5P_DEFAULT, c.data()),
-                 "dataset '" + name + "'");
-    std::vector<std::string> out;
-    for (char* s : c) {
-        out.emplace_back(s ? s : "");
-        H5free_memory(s);
+    if (H5Tget_class(file_type.get()) != H5T_STRING)
+        throw Hdf5Error("dataset '" + name + "' is not a string");
+    if (H5Tis_variable_str(file_type.get()) <= 0) {
+        const std::size_t size = H5Tget_size(file_type.get());
+        const auto count = static_cast<std::size_t>(element_count(d.get(), nullptr));
+        if (size == 0 || (count > 0 && size > (std::size_t{1} << 30) / count))
+            throw Hdf5Error("dataset '" + name + "' size");
+        std::vector<char> bytes(count * size);
+        Handle t = fixed_string_type(size);
+        if (count > 0)
+            check_status(H5Dread(d.get(), t.get(), H5S_ALL, H5S_ALL, H5P_DEFAULT, bytes.data()),
+                         "dataset '" + name + "'");
+        std::vector<std::string> out = split_fixed(bytes, count, size);
+        verify_checksum(d.get(), name, hash_of(out));
+        return out;
     }
+    if (checksums_required)  // files with checksums write none: a damaged type, not a format
+        throw Hdf5Error("dataset '" + name + "' is a variable-length string");
+    std::vector<char*> c(static_cast<std::size_t>(element_count(d.get(), nullptr)), nullptr);
+    std::vector<std::string> out;
+    if (!c.empty()) {
+        Handle t = vl_string_type();
+        check_status(H5Dread(d.get(), t.get(), H5S_ALL, H5S_ALL, H5P_DEFAULT, c.data()),
+                     "dataset '" + name + "'");
+        for (char* s : c) {
+            out.emplace_back(s ? s : "");
+            H5free_memory(s);
+        }
+    }
+    verify_checksum(d.get(), name, hash_of(out));
     return out;
 }
 

@@ -52,6 +52,36 @@ private:
     void* m_data = nullptr;
 };
 
+/// Every dataset written through these helpers carries an attribute "checksum": the 64-bit FNV-1a
+/// hash of its values (doubles and integers as little-endian bytes, strings as their bytes each
+/// after its length). The read helpers recompute it and throw Hdf5Error naming the dataset when
+/// it differs. FNV-1a maps any change of a single byte to a different hash (each step is a
+/// bijection of the running hash), so one flipped bit in the data is always found.
+inline constexpr const char* checksum_attribute = "checksum";
+
+/// While one is alive, reading a dataset without a checksum attribute is an error (files of a
+/// format that always writes them); otherwise such a dataset is read unchecked (older files).
+class RequireChecksums {
+public:
+    RequireChecksums();
+    ~RequireChecksums();
+    RequireChecksums(const RequireChecksums&) = delete;
+    RequireChecksums& operator=(const RequireChecksums&) = delete;
+
+private:
+    bool m_previous;
+};
+
+/// File access properties for new files: object headers and the superblock of the 1.8 format and
+/// later carry HDF5's own metadata checksums, so a flipped byte in an attribute is found too.
+/// Closes strongly, as strict_file_access.
+Handle checksummed_file_access();
+
+/// File access properties that close every object of the file with the file ("strong" close):
+/// after a failed read or write nothing of the file stays open, which otherwise left HDF5 looping
+/// or crashing in its clean-up at exit.
+Handle strict_file_access();
+
 Handle create_group(hid_t parent, const std::string& name, bool track_order = false);
 /// Opens an existing group; Hdf5Error naming it when missing.
 Handle open_group(hid_t parent, const std::string& name);

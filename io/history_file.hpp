@@ -30,12 +30,14 @@ public:
     /// the file when it cannot be written or an earlier history is not one veer wrote.
     HistoryFile(const std::filesystem::path& path, std::vector<std::string> model_variables,
                 bool resume, long keep_through_step);
+    /// Appends and flushes one row; throws InputError naming the file when it cannot be written.
     void append(const HistoryRow& row);
 
     /// Time and forces of the rows kept from the earlier history (empty for a new one).
     const ForceRecord& kept_forces() const { return m_kept; }
 
 private:
+    std::filesystem::path m_path;
     std::vector<std::string> m_variables;
     std::ofstream m_out;
     ForceRecord m_kept;

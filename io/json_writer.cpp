@@ -1,9 +1,7 @@
 #include "io/json_writer.hpp"
 
-#include <fstream>
-#include <sstream>
-
 #include "io/atomic_file.hpp"
+#include "io/input_file.hpp"
 #include "mesh/errors.hpp"
 
 namespace veer {
@@ -15,12 +13,9 @@ void write_json_file(const std::filesystem::path& path, const nlohmann::json& va
 }
 
 nlohmann::json read_json_file(const std::filesystem::path& path) {
-    std::ifstream in(path, std::ios::binary);
-    if (!in) throw InputError(path.string() + ": cannot open; expected a JSON file");
-    std::ostringstream text;
-    text << in.rdbuf();
+    const std::string text = read_input_file(path, "JSON file", record_file_cap);
     try {
-        return nlohmann::json::parse(text.str());
+        return nlohmann::json::parse(text);
     } catch (const nlohmann::json::parse_error& e) {
         throw InputError(path.string() + ": not valid JSON (at byte " + std::to_string(e.byte) +
                          ")");

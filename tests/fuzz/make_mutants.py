@@ -2,7 +2,7 @@
 """Writes a corpus of fuzzed inputs for veer: each mutant is a case file (mutant_NNNN.toml) and,
 for the coordinate-file family, the section table it names (mutant_NNNN.dat).
 
-    make_mutants.py --seed 17 --count 240 --out DIR [--family coordinates]
+    make_mutants.py --seed 17 --count 240 --out DIR [--family coordinates|cases]
 
 The same seed and count give the same corpus byte for byte. A family is a function
 family(rng, index) -> (case_text, {file name: bytes}); add one to FAMILIES to fuzz more inputs
@@ -191,7 +191,101 @@ def coordinates_family(rng, index):
     return case, {name: text.encode("utf-8", "surrogateescape")}
 
 
-FAMILIES = {"coordinates": coordinates_family}
+# The case-file family: a valid case of the survey drone's wing section (small grid), then one to
+# three damages: values out of range or of the wrong type, extreme numbers, huge strings, unknown
+# keys and tables, repeated keys, broken TOML, other line ends, NUL bytes, a byte-order mark, and
+# `coordinates` pointing at things that are not a section file (a device, a folder, a FIFO).
+CASE_KEYS = {
+    "geometry": {"naca": ['"2412"', '"0012"', '"23012"'], "trailing_edge": ['"open"', '"closed"'],
+                 "name": ['"survey drone wing"']},
+    "mesh": {"around": ["32", "48"], "normal": ["8", "12"], "wake": ["6", "8"],
+             "far_field": ["10", "12.5"], "first_cell": ["0.01", "5e-3"], "max_growth": ["1.2"]},
+    "flow": {"reynolds": ["1000", "2.5e5"], "alpha": ["2", "-4.5"],
+             "model": ['"laminar"', '"spalart-allmaras"']},
+    "run": {"mode": ['"steady"', '"unsteady"'], "steps": ["5", "200"], "end_time": ["1", "20"],
+            "cfl": ["0", "2", "14"], "residual_drop": ["1e-6"], "force_tolerance": ["1e-5"],
+            "output_every": ["0", "10"], "checkpoint_every": ["500"],
+            "pressure_solver": ['"multigrid"', '"eigen-cg"'],
+            "steady_scheme": ['"fast"', '"classic"'], "start_spin": ["0"]},
+    "post": {"contours": ["[0.5, 1, 2]"], "wake_stations": ["[0.25, 1]"]},
+}
+BAD_VALUES = ["0", "-1", "1e308", "-1e308", "1e-308", "5e-324", "nan", "inf", "-inf", "+nan",
+              "9223372036854775807", "-9223372036854775808", "99999999999999999999", "1e-3",
+              "0.0", "-0.0", "3.5", "65536", "8193", "true", "false", '""', '"x"',
+              '"' + "a" * 5000 + '"', "[]", "[1, 2, 3]", "[[1]]", "{}", "{a = 1}",
+              "1979-05-27T07:32:00Z", '"\\u0000"', '"two\\nlines"', "0x10", "1_000", "'lit'",
+              '"""multi\nline"""', "[" * 60 + "]" * 60, "[" * 3000 + "]" * 3000]
+SPECIAL_PATHS = ["/dev/zero", "/dev/urandom", "/dev/null", ".", "..", "/", "missing.dat",
+                 "fifo_NNNN", "", "a" * 5000, "/proc/self/mem", "\\u0000"]
+
+
+def case_lines(rng):
+    lines = []
+    for table, keys in CASE_KEYS.items():
+        lines.append("[%s]" % table)
+        for key, values in keys.items():
+            if table == "flow" and key == "reynolds" or rng.random() < 0.6:
+                lines.append("%s = %s" % (key, rng.choice(values)))
+    return lines
+
+
+def damage_case(rng, lines, index, files):
+    keyed = [k for k, l in enumerate(lines) if " = " in l]
+    k = rng.choice(keyed)
+    key = lines[k].split(" = ")[0]
+    op = rng.randrange(14)
+    if op <= 3:  # a value out of range or of another type
+        lines[k] = "%s = %s" % (key, rng.choice(BAD_VALUES))
+    elif op == 4:  # a line lost
+        del lines[k]
+    elif op == 5:  # a key given twice
+        lines.insert(k + 1, lines[k])
+    elif op == 6:  # an unknown key or table
+        lines.insert(rng.randrange(len(lines) + 1),
+                     rng.choice(["colour = 3", "[solver]", "[flow.extra]", "alpha = 4", "x.y = 1"]))
+    elif op == 7:  # broken TOML
+        lines[k] = rng.choice([lines[k][:-1], lines[k] + '"', "[" + lines[k], key + " =",
+                               "= " + key, lines[k].replace("=", ":"), lines[k] + " # ok",
+                               lines[k] + " 2"])
+    elif op == 8:  # the table header lost or garbled
+        heads = [q for q, l in enumerate(lines) if l.startswith("[")]
+        q = rng.choice(heads)
+        lines[q] = rng.choice(["", "[" + lines[q], lines[q].upper(), "[[%s]]" % lines[q][1:-1]])
+    elif op == 9:  # coordinates that are not a section file
+        path = rng.choice(SPECIAL_PATHS).replace("NNNN", "%04d" % index)
+        if path.startswith("fifo_"):
+            files[path] = None  # made as a FIFO by the writer
+        lines[:] = [l for l in lines if not l.startswith("naca")]
+        lines.insert(1, 'coordinates = "%s"' % path)
+    elif op == 10:  # a huge line
+        lines.insert(rng.randrange(len(lines) + 1), "# " + "x" * rng.choice([300, 100000]))
+    elif op == 11:  # a NUL or other control byte inside a line
+        at = rng.randrange(len(lines[k]) + 1)
+        lines[k] = lines[k][:at] + rng.choice(["\x00", "\x01", "\x1b[2J", "\x7f"]) + lines[k][at:]
+    elif op == 12:  # a key of another table
+        other = rng.choice([t for t in CASE_KEYS])
+        lines.insert(k, "%s = %s" % (rng.choice(list(CASE_KEYS[other])), rng.choice(BAD_VALUES)))
+    else:  # two sections at once, or none
+        lines[:] = [l for l in lines if not l.startswith("naca")]
+        if rng.random() < 0.5:
+            lines[1:1] = ['naca = "0012"', "circle = true"]
+
+
+def case_family(rng, index):
+    lines = case_lines(rng)
+    files = {}
+    for _ in range(rng.choice([1, 1, 2, 3])):
+        damage_case(rng, lines, index, files)
+    ending = rng.choice(["\n", "\n", "\r\n", "\r"])
+    text = ending.join(lines) + ending
+    if rng.random() < 0.05:
+        text = "\ufeff" + text  # a byte-order mark
+    if rng.random() < 0.05:
+        text = text[: rng.randrange(len(text) + 1)]
+    return text, files
+
+
+FAMILIES = {"coordinates": coordinates_family, "cases": case_family}
 
 
 def main():
@@ -206,9 +300,14 @@ def main():
     for i in range(a.count):
         case, files = FAMILIES[a.family](rng, i)
         for name, data in files.items():
-            with open(os.path.join(a.out, name), "wb") as f:
+            target = os.path.join(a.out, name)
+            if data is None:  # a FIFO with no writer: a reader that opens it blindly hangs
+                os.mkfifo(target)
+                continue
+            with open(target, "wb") as f:
                 f.write(data)
-        with open(os.path.join(a.out, "mutant_%04d.toml" % i), "w") as f:
+        with open(os.path.join(a.out, "mutant_%04d.toml" % i), "w", encoding="utf-8",
+                  errors="surrogateescape", newline="") as f:
             f.write(case)
     print("wrote %d %s mutants (seed %d) into %s" % (a.count, a.family, a.seed, a.out))
 

@@ -1,17 +1,22 @@
 #!/usr/bin/env python3
 """Runs `veer check` on every case of a fuzz corpus and fails unless each one ends cleanly.
 
-    run_corpus.py --veer build/app/veer --work DIR [--seed 17 --count 240] [--jobs 2] [--timeout 5]
+    run_corpus.py --veer build/app/veer --work DIR [--seed 17 --count 240] [--family cases]
+                  [--jobs 2] [--timeout 5] [--memory-mb 500]
 
 With --seed and --count the corpus is first written into DIR by make_mutants.py. A mutant ends
 cleanly when veer exits 0 having built the grid ("valid case"), or exits 2 with one line
-"veer: error: ..." on stderr; anything else (a crash, a sanitizer report, an internal error,
-more output lines, a run longer than the timeout) is a failure, listed with its case file.
+"veer: error: ..." of at most 300 characters on stderr; anything else (a crash, a sanitizer
+report, an internal error, more lines on stderr, a line longer than 300 characters anywhere, a
+run longer than the timeout, memory above the limit) is a failure, listed with its case file.
+Each run gets an address-space limit of --memory-mb (0: none; sanitizer builds reserve terabytes
+of shadow memory and cannot run under one).
 """
 import argparse
 import concurrent.futures
 import glob
 import os
+import resource
 import subprocess
 import sys
 import time
@@ -26,17 +31,35 @@ ENV = dict(os.environ, OMP_WAIT_POLICY=os.environ.get("OMP_WAIT_POLICY", "PASSIV
            OMP_NUM_THREADS=os.environ.get("OMP_NUM_THREADS", "1"))
 
 
-def check_one(veer, case, timeout):
+# Longest line veer may print (app/error_line.hpp); counted in bytes, which bounds characters.
+LINE_LIMIT = 300
+
+
+def memory_limit(megabytes):
+    """A preexec function giving the child an address-space limit (None: no limit)."""
+    if not megabytes:
+        return None
+    limit = megabytes << 20
+    return lambda: resource.setrlimit(resource.RLIMIT_AS, (limit, limit))
+
+
+def check_one(veer, case, timeout, megabytes):
     """(case, verdict or None when clean, exit code, seconds)"""
     start = time.monotonic()
     try:
-        r = subprocess.run([veer, "check", case], capture_output=True, timeout=timeout, env=ENV)
+        # Run from the corpus folder, as a user would; cwd also keeps stray relative paths there.
+        r = subprocess.run([veer, "check", case], capture_output=True, timeout=timeout, env=ENV,
+                           preexec_fn=memory_limit(megabytes), cwd=os.path.dirname(case))
     except subprocess.TimeoutExpired:
         return case, "no answer within %g s" % timeout, None, timeout
     took = time.monotonic() - start
     out = r.stdout.decode("utf-8", "replace")
     err = r.stderr.decode("utf-8", "replace")
     err_lines = err.splitlines()
+    longest = max([len(l) for l in r.stdout.splitlines() + r.stderr.splitlines()] or [0])
+    if longest > LINE_LIMIT:
+        return case, "a line of %d characters (limit %d): %s" % (
+            longest, LINE_LIMIT, (err_lines or [""])[0][:200]), r.returncode, took
     if r.returncode == 0 and "valid case" in out and not err:
         return case, None, 0, took
     if r.returncode == 2 and len(err_lines) == 1 and err_lines[0].startswith("veer: error: "):
@@ -54,9 +77,11 @@ def main():
     ap.add_argument("--family", default="coordinates")
     ap.add_argument("--jobs", type=int, default=2)
     ap.add_argument("--timeout", type=float, default=5.0)
+    ap.add_argument("--memory-mb", type=int, default=500)
     a = ap.parse_args()
     if a.seed is not None and a.count is not None:
-        for old in glob.glob(os.path.join(a.work, "mutant_*")):
+        for old in glob.glob(os.path.join(a.work, "mutant_*")) + glob.glob(
+                os.path.join(a.work, "fifo_*")):
             os.remove(old)
         sys.argv = [sys.argv[0], "--seed", str(a.seed), "--count", str(a.count), "--out", a.work,
                     "--family", a.family]
@@ -67,13 +92,13 @@ def main():
         return 1
     start = time.monotonic()
     with concurrent.futures.ThreadPoolExecutor(max_workers=a.jobs) as pool:
-        results = list(pool.map(lambda c: check_one(a.veer, c, a.timeout), cases))
+        results = list(pool.map(lambda c: check_one(a.veer, c, a.timeout, a.memory_mb), cases))
     bad = [r for r in results if r[1] is not None]
     accepted = sum(1 for r in results if r[1] is None and r[2] == 0)
     refused = sum(1 for r in results if r[1] is None and r[2] == 2)
     slowest = max(results, key=lambda r: r[3])
-    print("fuzz: %d mutants, %d meshed, %d refused cleanly, %d failed; %.1f s in all, slowest "
-          "%.2f s (%s)" % (len(results), accepted, refused, len(bad), time.monotonic() - start,
+    print("fuzz (%s): %d mutants, %d meshed, %d refused cleanly, %d failed; %.1f s in all, slowest "
+          "%.2f s (%s)" % (a.family, len(results), accepted, refused, len(bad), time.monotonic() - start,
                            slowest[3], os.path.basename(slowest[0])))
     for case, verdict, _, _ in bad[:20]:
         print("  %s: %s" % (case, verdict))

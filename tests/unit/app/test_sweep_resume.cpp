@@ -31,7 +31,7 @@ PointRecord made_up_point(const SweepCase& sweep, double alpha) {
 /// A point folder as a finished sweep leaves it, in a sweep folder stamped with the case.
 void make_finished(const std::filesystem::path& sweep_dir, const PointRecord& r,
                    const std::filesystem::path& case_file) {
-    prepare_output_dir(sweep_dir, read_case_file(case_file).text, false);
+    (void)prepare_output_dir(sweep_dir, read_case_file(case_file).text, false);
     const auto dir = sweep_dir / r.folder;
     std::filesystem::create_directories(dir);
     write_json_file(dir / "summary.json", {{"cl", r.cl}});

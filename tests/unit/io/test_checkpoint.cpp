@@ -8,6 +8,7 @@
 #include <fstream>
 #include <limits>
 
+#include "io/atomic_file.hpp"
 #include "io/checkpoint.hpp"
 #include "io_test_support.hpp"
 #include "mesh/errors.hpp"
@@ -91,7 +92,7 @@ TEST(Checkpoint, RoundTripIsBitExact) {
     test::ScratchDir dir;
     const CheckpointData written = sample_checkpoint();
     write_checkpoint(dir / "run.h5", written);
-    EXPECT_FALSE(std::filesystem::exists(dir / "run.h5.tmp"));
+    EXPECT_FALSE(std::filesystem::exists(temporary_path_for(dir / "run.h5")));
     // Bit for bit (NaN, -0 and a denormal included): a restart must continue the same run.
     expect_same(written, read_checkpoint(dir / "run.h5"));
 }
@@ -109,18 +110,19 @@ TEST(Checkpoint, PartialTmpFileDoesNotReplaceAGoodCheckpoint) {
     const auto path = dir / "run.h5";
     const CheckpointData good = sample_checkpoint();
     write_checkpoint(path, good);
-    // A crash in the middle of the next write leaves a truncated run.h5.tmp behind.
+    // A crash in the middle of the next write leaves a truncated temporary file behind.
     const std::string bytes = test::read_file_text(path);
-    std::ofstream(dir / "run.h5.tmp", std::ios::binary) << bytes.substr(0, bytes.size() / 2);
+    const std::filesystem::path tmp = temporary_path_for(path);
+    std::ofstream(tmp, std::ios::binary) << bytes.substr(0, bytes.size() / 2);
     expect_same(good, read_checkpoint(path));
-    const std::string truncated_error = error_of(dir / "run.h5.tmp");
-    EXPECT_NE(truncated_error.find("run.h5.tmp"), std::string::npos) << truncated_error;
+    const std::string truncated_error = error_of(tmp);
+    EXPECT_NE(truncated_error.find(tmp.filename().string()), std::string::npos) << truncated_error;
     // The next write starts over and replaces both.
     CheckpointData later = good;
     later.step += 1;
     write_checkpoint(path, later);
     EXPECT_EQ(read_checkpoint(path).step, later.step);
-    EXPECT_FALSE(std::filesystem::exists(dir / "run.h5.tmp"));
+    EXPECT_FALSE(std::filesystem::exists(temporary_path_for(dir / "run.h5")));
 }
 
 TEST(Checkpoint, MissingFileNamesItAndWhatWasExpected) {
@@ -180,7 +182,7 @@ TEST(Checkpoint, BadArrayNameIsRefusedBeforeAnythingIsWritten) {
     d.scalars[""] = 1.0;
     EXPECT_THROW(write_checkpoint(dir / "c.h5", d), InternalError);
     EXPECT_FALSE(std::filesystem::exists(dir / "c.h5"));
-    EXPECT_FALSE(std::filesystem::exists(dir / "c.h5.tmp"));
+    EXPECT_FALSE(std::filesystem::exists(temporary_path_for(dir / "c.h5")));
 }
 
 }  // namespace

@@ -63,7 +63,9 @@ TEST(CoordinateFile, ReadsTitleCommentsBlanksAndSeparators) {
 TEST(CoordinateFile, MissingFileCannotBeOpened) {
     const auto path = std::filesystem::path(testing::TempDir()) / "no_such_section.dat";
     std::filesystem::remove(path);
-    EXPECT_EQ(error_of(path), path.string() + ": cannot open");
+    EXPECT_EQ(error_of(path), path.string() +
+                                  ": cannot open the coordinate file (No such file or "
+                                  "directory); expected the path of a readable file");
 }
 
 TEST(CoordinateFile, EmptyFileIsRefused) {

@@ -1,5 +1,6 @@
 // JSON result files: pretty, complete, atomic; and the small atomic-file helper under them.
 #include <gtest/gtest.h>
+#include <unistd.h>
 
 #include <cmath>
 #include <fstream>
@@ -64,19 +65,27 @@ TEST(JsonWriter, ErrorsNameTheFile) {
                  InputError);
 }
 
-TEST(AtomicFile, TemporaryNameSitsBesideTheTarget) {
+TEST(AtomicFile, TemporaryNameSitsBesideTheTargetAndNamesTheProcess) {
     const std::filesystem::path t = temporary_path_for("/runs/a4/checkpoint.h5");
-    EXPECT_EQ(t, std::filesystem::path("/runs/a4/checkpoint.h5.tmp"));
+    // Two runs writing one target never share a temporary file: the name holds the pid.
+    EXPECT_EQ(t, std::filesystem::path("/runs/a4/checkpoint.h5." + std::to_string(::getpid()) +
+                                       ".tmp"));
+    EXPECT_EQ(t, temporary_path_for("/runs/a4/checkpoint.h5"));  // stable within a process
+    EXPECT_FALSE(is_stale_temporary(t));                          // ours, not stale
+    EXPECT_TRUE(is_stale_temporary("/runs/a4/checkpoint.h5.4242424.tmp"));
+    EXPECT_FALSE(is_stale_temporary("/runs/a4/notes.tmp"));  // not a name veer writes
+    EXPECT_FALSE(is_stale_temporary("/runs/a4/checkpoint.h5"));
 }
 
 TEST(AtomicFile, AStaleTemporaryDoesNotDisturbTheTarget) {
     test::ScratchDir dir;
     write_text_atomically(dir / "history.csv", "step,cl\n1,0.5\n");
-    std::ofstream(dir / "history.csv.tmp") << "half a li";  // a crash mid-write
+    const std::filesystem::path tmp = temporary_path_for(dir / "history.csv");
+    std::ofstream(tmp) << "half a li";  // a crash mid-write
     EXPECT_EQ(test::read_file_text(dir / "history.csv"), "step,cl\n1,0.5\n");
     write_text_atomically(dir / "history.csv", "step,cl\n2,0.6\n");
     EXPECT_EQ(test::read_file_text(dir / "history.csv"), "step,cl\n2,0.6\n");
-    EXPECT_FALSE(std::filesystem::exists(dir / "history.csv.tmp"));
+    EXPECT_FALSE(std::filesystem::exists(tmp));
 }
 
 }  // namespace

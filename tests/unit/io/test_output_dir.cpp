@@ -19,15 +19,15 @@ fs::path fresh_dir(const std::string& name) {
 
 TEST(OutputDir, CreatesAMissingFolder) {
     const fs::path d = fresh_dir("missing") / "nested";
-    prepare_output_dir(d, "case a", false);
+    (void)prepare_output_dir(d, "case a", false);
     EXPECT_TRUE(fs::is_directory(d));
 }
 
 TEST(OutputDir, ReusesTheFolderOfTheSameCase) {
     const fs::path d = fresh_dir("same");
-    prepare_output_dir(d, "case a", false);
+    (void)prepare_output_dir(d, "case a", false);
     std::ofstream(d / "mesh.vts") << "x";
-    EXPECT_NO_THROW(prepare_output_dir(d, "case a", false));
+    EXPECT_NO_THROW((void)prepare_output_dir(d, "case a", false));
     EXPECT_TRUE(fs::exists(d / "mesh.vts"));
 }
 
@@ -36,19 +36,19 @@ TEST(OutputDir, RefusesAnotherStudyUnlessForced) {
     fs::create_directories(d);
     std::ofstream(d / "notes.txt") << "the user's own file";
     try {
-        prepare_output_dir(d, "case b", false);
+        (void)prepare_output_dir(d, "case b", false);
         FAIL() << "a folder with someone else's file was reused";
     } catch (const InputError& e) {
         EXPECT_NE(std::string(e.what()).find("--force"), std::string::npos);
     }
-    EXPECT_NO_THROW(prepare_output_dir(d, "case b", true));
+    EXPECT_NO_THROW((void)prepare_output_dir(d, "case b", true));
     EXPECT_TRUE(fs::exists(d / "notes.txt"));  // forcing writes beside, never deletes
 }
 
 TEST(OutputDir, RefusesAFile) {
     const fs::path d = fresh_dir("file");
     std::ofstream(d) << "x";
-    EXPECT_THROW(prepare_output_dir(d, "case", true), InputError);
+    EXPECT_THROW((void)prepare_output_dir(d, "case", true), InputError);
     fs::remove(d);
 }
 

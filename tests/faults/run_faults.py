@@ -1,0 +1,221 @@
+#!/usr/bin/env python3
+"""Faults a user's machine produces, through the `veer` command line (issue 19's trial):
+
+    run_faults.py --veer build/app/veer --work DIR CHECK
+
+CHECK is one of:
+  bad-paths   a device, a FIFO, a folder and a symlink to a device as the case file or as the
+              case's coordinates: exit 2 with one line, within a second (no read, no wait)
+  arguments   mistakes in the arguments (a missing case, an unknown option, a 5000-character
+              path): exit 2 with one line, never the parser's own codes or "internal error"
+  two-runs    two identical runs started at once into one folder: exactly one runs, the other is
+              refused naming the first (pid, host, start time); the first's history is whole
+  full-disk   a run whose file system fills up after its first checkpoint (a 2 MB tmpfs, mounted
+              directly as root or in a user namespace): exit 2 with one line, no crash, and the
+              last good checkpoint still restarts. Exits 77 (skipped) where no tmpfs can be made.
+Each prints what it measured and exits 1 on the first failure.
+"""
+import argparse
+import os
+import subprocess
+import sys
+import time
+
+ENV = dict(os.environ, OMP_WAIT_POLICY="PASSIVE", OMP_NUM_THREADS="1")
+SKIPPED = 77
+
+# A survey drone's wing section on a tiny grid: fast enough for a few hundred steps a second.
+CASE = """[geometry]
+naca = "2412"
+name = "survey drone wing"
+[mesh]
+around = 32
+normal = 8
+wake = 6
+far_field = 10
+first_cell = 0.01
+[flow]
+reynolds = 1000
+alpha = 2
+[run]
+mode = "steady"
+steps = {steps}
+checkpoint_every = {every}
+cfl = 2
+steady_scheme = "classic"
+residual_drop = 1e-14
+force_tolerance = 1e-14
+"""
+
+
+def veer(args, work, timeout=60, **kw):
+    start = time.monotonic()
+    r = subprocess.run(args, capture_output=True, timeout=timeout, env=ENV, cwd=work, **kw)
+    return r, time.monotonic() - start
+
+
+def fail(message):
+    print("FAILED: " + message)
+    sys.exit(1)
+
+
+def expect_one_line_refusal(r, took, what, limit_s=None, words=None):
+    err = r.stderr.decode("utf-8", "replace").splitlines()
+    if r.returncode != 2 or len(err) != 1 or not err[0].startswith("veer: error: "):
+        fail("%s: exit %d, stderr %r" % (what, r.returncode, err[:3]))
+    if len(err[0].encode()) > 300:
+        fail("%s: a line of %d bytes" % (what, len(err[0].encode())))
+    if limit_s is not None and took > limit_s:
+        fail("%s: refused after %.2f s (limit %.1f s)" % (what, took, limit_s))
+    if words and words not in err[0]:
+        fail("%s: %r does not say %r" % (what, err[0], words))
+    print("  %-44s exit 2 in %.2f s: %s" % (what, took, err[0][:110]))
+
+
+def write(path, text):
+    with open(path, "w") as f:
+        f.write(text)
+
+
+def bad_paths(veer_bin, work):
+    fifo = os.path.join(work, "pipe")
+    if not os.path.exists(fifo):
+        os.mkfifo(fifo)
+    link = os.path.join(work, "random_link")
+    if not os.path.lexists(link):
+        os.symlink("/dev/urandom", link)
+    places = [("/dev/zero", "a device"), (fifo, "a pipe"), (work, "a folder"),
+              (link, "a device")]
+    for path, kind in places:
+        r, took = veer([veer_bin, "check", path], work, timeout=10)
+        expect_one_line_refusal(r, took, "case file " + os.path.basename(path), 1.0, kind)
+        case = os.path.join(work, "uses_%s.toml" % os.path.basename(path).replace(".", "_"))
+        write(case, CASE.format(steps=5, every=500).replace('naca = "2412"',
+                                                           'coordinates = "%s"' % path))
+        r, took = veer([veer_bin, "check", case], work, timeout=10)
+        expect_one_line_refusal(r, took, "coordinates " + os.path.basename(path), 1.0, kind)
+
+
+def arguments(veer_bin, work):
+    write(os.path.join(work, "wing.toml"), CASE.format(steps=5, every=500))
+    tries = [(["check"], "no case"), (["check", "missing.toml"], "missing case"),
+             (["check", "a" * 5000 + ".toml"], "5000-character path"),
+             (["run", "wing.toml"], "run without -o"), (["run", "wing.toml", "--bogus"], "unknown option"),
+             (["sweep", "wing.toml", "-o", "s", "--alpha", "0:4:2", "--steady-steps", "-3"],
+              "negative option value"),
+             (["report", "nowhere"], "missing report folder"), (["fly"], "unknown subcommand")]
+    for args, what in tries:
+        r, took = veer([veer_bin] + args, work, timeout=20)
+        expect_one_line_refusal(r, took, what)
+    r, _ = veer([veer_bin, "--help"], work)
+    if r.returncode != 0:
+        fail("--help: exit %d" % r.returncode)
+
+
+def two_runs(veer_bin, work):
+    case = os.path.join(work, "wing.toml")
+    write(case, CASE.format(steps=400, every=100))
+    out = os.path.join(work, "together")
+    args = [veer_bin, "run", case, "-o", out, "--quiet"]
+    runs = [subprocess.Popen(args, stdout=subprocess.PIPE, stderr=subprocess.PIPE, env=ENV, cwd=work)
+            for _ in range(2)]
+    results = [(p.wait(timeout=300), p.stderr.read().decode("utf-8", "replace")) for p in runs]
+    refused = [err for code, err in results if code == 2 and "another veer run" in err]
+    finished = [code for code, err in results if code in (0, 1)]
+    print("  exit statuses %s" % [code for code, _ in results])
+    if len(refused) != 1 or len(finished) != 1:
+        fail("expected one run and one refusal, got %s" % results)
+    line = refused[0].strip()
+    for words in ("pid ", "started "):
+        if words not in line:
+            fail("the refusal %r does not name the first run (%r)" % (line, words))
+    print("  refused: %s" % line[:160])
+    with open(os.path.join(out, "history.csv"), "rb") as f:
+        history = f.read()
+    if b"\0" in history:
+        fail("history.csv holds NUL bytes")
+    steps = [int(l.split(b",")[0]) for l in history.splitlines()[1:] if l]
+    if steps != list(range(1, len(steps) + 1)) or len(steps) < 2:
+        fail("history.csv steps are not 1..n: %s" % steps[:10])
+    print("  the run's history: %d rows, steps 1..%d without a gap" % (len(steps), steps[-1]))
+
+
+def mount_tmpfs(where):
+    """The command prefix that runs a command with a 2 MB tmpfs at `where`, or None."""
+    if os.geteuid() == 0:
+        ok = subprocess.run(["mount", "-t", "tmpfs", "-o", "size=2m", "tmpfs", where],
+                            capture_output=True).returncode == 0
+        return [] if ok else None
+    probe = subprocess.run(["unshare", "-rm", "sh", "-c",
+                            "mount -t tmpfs -o size=2m tmpfs '%s'" % where], capture_output=True)
+    return None if probe.returncode else ["unshare", "-rm"]
+
+
+def full_disk(veer_bin, work):
+    disk = os.path.join(work, "small_disk")
+    os.makedirs(disk, exist_ok=True)
+    prefix = mount_tmpfs(disk)
+    if prefix is None:
+        print("SKIPPED: no tmpfs can be mounted here (not root, no user namespaces)")
+        sys.exit(SKIPPED)
+    case = os.path.join(work, "wing.toml")
+    write(case, CASE.format(steps=200000, every=400))
+    out = os.path.join(disk, "run")
+    # Inside one shell (the mount of a user namespace lives only there): start the run, wait for
+    # its first checkpoint, fill the disk, wait for the run and print its exit status.
+    script = """
+set -u
+if [ -n "${NEEDS_MOUNT:-}" ]; then mount -t tmpfs -o size=2m tmpfs "$DISK"; fi
+"$VEER" run "$CASE" -o "$OUT" --quiet 2>"$DISK/../stderr.txt" &
+pid=$!
+for k in $(seq 600); do [ -f "$OUT/checkpoint.h5" ] && break; sleep 0.05; done
+cp "$OUT/checkpoint.h5" "$DISK/../first.h5" 2>/dev/null
+dd if=/dev/zero of="$DISK/filler" bs=64k 2>/dev/null
+wait $pid; echo "exit=$?"
+cp "$OUT/checkpoint.h5" "$DISK/../kept.h5"; cp "$OUT/.veer-case.toml" "$DISK/../kept.toml"
+ls "$OUT" > "$DISK/../listing.txt"
+umount "$DISK" 2>/dev/null || true
+"""
+    env = dict(ENV, VEER=veer_bin, CASE=case, OUT=out, DISK=disk,
+               NEEDS_MOUNT="1" if prefix else "")
+    r = subprocess.run(prefix + ["sh", "-c", script], capture_output=True, timeout=300, env=env)
+    if not prefix:
+        subprocess.run(["umount", disk], capture_output=True)
+    text = r.stdout.decode()
+    status = [l for l in text.splitlines() if l.startswith("exit=")]
+    with open(os.path.join(work, "stderr.txt"), "rb") as f:
+        err = f.read().decode("utf-8", "replace").splitlines()
+    print("  run on a full disk: %s, stderr %r" % (status, err))
+    if status != ["exit=2"] or len(err) != 1 or not err[0].startswith("veer: error: "):
+        fail("expected exit 2 with one line")
+    if len(err[0].encode()) > 300:
+        fail("a line of %d bytes" % len(err[0].encode()))
+    # The last good checkpoint restarts (a few more steps into a folder on the normal disk).
+    restart_out = os.path.join(work, "after_full_disk")
+    r, took = veer([veer_bin, "run", "--restart", os.path.join(work, "kept.h5"), "-o",
+                    restart_out, "--quiet", "--set", "run.steps=405"], work, timeout=120)
+    if r.returncode not in (0, 1):
+        fail("the kept checkpoint does not restart: exit %d %r" % (r.returncode, r.stderr[:300]))
+    print("  the kept checkpoint restarted (exit %d, %.1f s)" % (r.returncode, took))
+
+
+CHECKS = {"bad-paths": bad_paths, "arguments": arguments, "two-runs": two_runs,
+          "full-disk": full_disk}
+
+
+def main():
+    ap = argparse.ArgumentParser(description=__doc__.split("\n")[0])
+    ap.add_argument("--veer", required=True)
+    ap.add_argument("--work", required=True)
+    ap.add_argument("check", choices=sorted(CHECKS))
+    a = ap.parse_args()
+    work = os.path.join(os.path.abspath(a.work), a.check)
+    subprocess.run(["rm", "-rf", work])
+    os.makedirs(work)
+    CHECKS[a.check](os.path.abspath(a.veer), work)
+    print("%s: passed" % a.check)
+    return 0
+
+
+if __name__ == "__main__":
+    sys.exit(main())
