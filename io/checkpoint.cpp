@@ -198,7 +198,8 @@ void write_checkpoint(const fs::path& path, const CheckpointData& data) {
     } catch (const hdf5::Hdf5Error& e) {
         std::error_code ec;
         fs::remove(tmp, ec);
-        throw InputError(path.string() + ": cannot write the checkpoint (" + e.what() + ")");
+        throw InputError(path.string() + ": cannot write the checkpoint (" + e.what() +
+                         "); is the disk full? The previous checkpoint is kept");
     }
     commit_temporary(tmp, path);
 }
