@@ -152,6 +152,35 @@ void check_reversals(const RawOutline& raw) {
     }
 }
 
+/// A point far beyond all others (a typing error such as 1e308 or a value in other units) would
+/// set the outline's size, and with it every size-relative tolerance, so that the error would be
+/// blamed on innocent lines. Such a point is named first: farther from the median point than
+/// `far_point_ratio` times the median distance (a section's points lie within about 4 times it).
+void check_far_points(const RawOutline& raw) {
+    constexpr double far_point_ratio = 1000.0;
+    const auto& p = raw.points;
+    const auto median = [](std::vector<double> v) {
+        std::nth_element(v.begin(), v.begin() + static_cast<std::ptrdiff_t>(v.size() / 2), v.end());
+        return v[v.size() / 2];
+    };
+    std::vector<double> xs, ys;
+    for (const Vec2& q : p) {
+        xs.push_back(q.x);
+        ys.push_back(q.y);
+    }
+    const double cx = median(xs), cy = median(ys);
+    std::vector<double> reach;  // halved before squaring: no overflow even at 1e308
+    for (const Vec2& q : p) reach.push_back(std::hypot(0.5 * (q.x - cx), 0.5 * (q.y - cy)));
+    const double typical = median(reach);
+    for (std::size_t k = 0; k < p.size(); ++k)
+        if (!(reach[k] <= far_point_ratio * typical) && typical > 0.0)
+            throw InputError(outline_location(raw, k) + ": point " + format_point(p[k]) +
+                             " lies far from all the others (more than 1000 times the typical "
+                             "distance); a typing error? every point of the section belongs "
+                             "on its outline" +
+                             neighbours_text(raw, k, k));
+}
+
 /// Box of a segment widened by `tol`.
 struct SegmentBox {
     double x0, x1, y0, y1;
@@ -251,6 +280,7 @@ void check_outline(const RawOutline& raw) {
                          std::to_string(p.size()));
     }
     VEER_VERIFY(raw.lines.empty() || raw.lines.size() == p.size(), "one line number per point");
+    check_far_points(raw);
     const double size = outline_size(p);
     if (!(size > 0.0) || !std::isfinite(size)) {
         throw InputError(raw.source + ": the outline has no extent (all points coincide)");

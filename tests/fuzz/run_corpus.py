@@ -79,6 +79,7 @@ def main():
     ap.add_argument("--timeout", type=float, default=5.0)
     ap.add_argument("--memory-mb", type=int, default=500)
     a = ap.parse_args()
+    a.veer = os.path.abspath(a.veer)  # each mutant runs from its own folder
     if a.seed is not None and a.count is not None:
         for old in glob.glob(os.path.join(a.work, "mutant_*")) + glob.glob(
                 os.path.join(a.work, "fifo_*")):

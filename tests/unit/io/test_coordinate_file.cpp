@@ -152,5 +152,27 @@ TEST(CoordinateFile, ImportedBluntSectionIsClosed) {
     EXPECT_GT(s.points[s.leading_edge + s.leading_edge / 2].y, 0.0);  // then the upper
 }
 
+TEST(CoordinateFile, AFarPointIsBlamedOnItsOwnLine) {
+    // A typing error of 1e308 on line 21 set the outline's size and the duplicate check then
+    // blamed line 4 (issue 19). 30 cosine stations per side of a 12 % thick section.
+    std::string text = "survey drone wing section\n";
+    constexpr int n = 30;
+    for (int side : {1, -1})
+        for (int k = 0; k <= n; ++k) {
+            const int q = side > 0 ? n - k : k;
+            if (side < 0 && q == 0) continue;
+            const double x = 0.5 * (1.0 - std::cos(M_PI * q / n));
+            const double t = 0.6 * (0.2969 * std::sqrt(x) - 0.1260 * x - 0.3516 * x * x +
+                                    0.2843 * x * x * x - 0.1036 * x * x * x * x);
+            text += (q == 15 && side > 0) ? "1e308 0.01\n"  // the typing error, on line 17
+                                          : std::to_string(x) + " " + std::to_string(side * t) +
+                                                "\n";
+        }
+    const std::string e = error_of(write_file("far_point.dat", text));
+    EXPECT_NE(e.find("far_point.dat:17: point (1e+308, 0.01) lies far from all the others"),
+              std::string::npos)
+        << e;
+}
+
 }  // namespace
 }  // namespace veer
