@@ -15,7 +15,7 @@ TEST(ErrorLine, ShortMessagesPassUnchanged) {
 }
 
 TEST(ErrorLine, ControlCharactersBecomeSpaces) {
-    EXPECT_EQ(one_line(std::string("a\nb\rc\0d\x1b", 9), 300), "a b c d ");
+    EXPECT_EQ(one_line(std::string("a\nb\rc\0d\x1b", 8), 300), "a b c d ");
 }
 
 TEST(ErrorLine, LongValuesAreShortenedKeepingBothEnds) {
