@@ -75,11 +75,42 @@ std::vector<SeriesFrame> read_pvd(const fs::path& path) {
     return frames;
 }
 
+namespace {
+
+/// Removes the frames of an earlier series in `dir` so that a fresh series never lists beside
+/// them (a viewer opening the folder's frames would mix two runs). Only veer's own frames go: the
+/// files the old fields.pvd lists under veer's frame names, and frames of that name numbered
+/// after the last listed one (written by a run killed before it listed them). Nothing else.
+void remove_earlier_frames(const fs::path& dir, const fs::path& pvd) {
+    std::error_code ec;
+    if (!fs::is_regular_file(pvd, ec)) return;
+    std::vector<SeriesFrame> old;
+    try {
+        old = read_pvd(pvd);
+    } catch (const InputError&) {
+        return;  // not a list veer wrote: leave every file alone
+    }
+    int last = -1;
+    for (const SeriesFrame& f : old) {
+        const int n = frame_number(f.file);
+        if (n < 0 || f.file.find('/') != std::string::npos) continue;
+        last = std::max(last, n);
+        fs::remove(dir / f.file, ec);
+    }
+    for (const fs::directory_entry& e : fs::directory_iterator(dir, ec))
+        if (frame_number(e.path().filename().string()) > last && e.is_regular_file(ec))
+            fs::remove(e.path(), ec);
+    fs::remove(pvd, ec);
+}
+
+}  // namespace
+
 FieldSeries::FieldSeries(fs::path dir, SeriesStart start) : m_dir(std::move(dir)) {
     std::error_code ec;
     fs::create_directories(m_dir, ec);
     if (ec) throw InputError(m_dir.string() + ": cannot create the folder: " + ec.message());
     if (start == SeriesStart::resume && fs::exists(pvd_path(), ec)) m_frames = read_pvd(pvd_path());
+    if (start == SeriesStart::fresh) remove_earlier_frames(m_dir, pvd_path());
 }
 
 void FieldSeries::discard_after(double time) {

@@ -26,8 +26,9 @@ enum class SeriesStart { fresh, resume };
 class FieldSeries {
 public:
     /// The series in `dir` (created if missing). `resume` reads the existing fields.pvd (if any)
-    /// and throws InputError naming it when it is not a collection file; `fresh` ignores it
-    /// (it is replaced when the first frame is written).
+    /// and throws InputError naming it when it is not a collection file; `fresh` removes the
+    /// frames an earlier series in `dir` listed (veer's own frame files only, so a viewer never
+    /// mixes two runs) and the old list; a list that is not a collection file is left alone.
     FieldSeries(std::filesystem::path dir, SeriesStart start);
 
     /// Forgets listed frames later than `time`, e.g. those a crashed run wrote after the

@@ -113,6 +113,10 @@ MUTATIONS = [
              "    if (line.size() <= limit) return line;",
              "    return line;",
              "error messages printed whole (a 2 MB value, 5000-character paths)"),
+    Mutation("force-old-frames", "io/field_series.cpp",
+             "    if (start == SeriesStart::fresh) remove_earlier_frames(m_dir, pvd_path());",
+             "    if ((false)) remove_earlier_frames(m_dir, pvd_path());",
+             "a fresh run leaves the previous run's frames beside its own"),
 ]
 
 

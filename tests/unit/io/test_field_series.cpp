@@ -136,6 +136,37 @@ TEST(FieldSeries, FreshStartReplacesAnOldList) {
     ASSERT_EQ(read_pvd(dir / "fields.pvd").size(), 1u);
 }
 
+TEST(FieldSeries, FreshStartRemovesOnlyTheOldSeriesOwnFrames) {
+    // --force or a rerun into the same folder: three old frames (one written by a run killed
+    // before it listed it) go, so a viewer cannot mix two runs; the user's files stay.
+    test::ScratchDir dir;
+    Case k;
+    {
+        FieldSeries old(dir.path(), SeriesStart::fresh);
+        for (double t : {1.0, 2.0}) old.write_frame(t, k.grid, k.metrics, k.flow);
+    }
+    std::filesystem::copy_file(dir / "fields_000001.vts", dir / "fields_000002.vts");
+    std::ofstream(dir / "fields_final.vts") << "the user's";
+    std::ofstream(dir / "notes.txt") << "the user's";
+    FieldSeries fresh(dir.path(), SeriesStart::fresh);
+    for (const char* gone : {"fields_000000.vts", "fields_000001.vts", "fields_000002.vts"})
+        EXPECT_FALSE(std::filesystem::exists(dir / gone)) << gone;
+    EXPECT_TRUE(std::filesystem::exists(dir / "fields_final.vts"));
+    EXPECT_TRUE(std::filesystem::exists(dir / "notes.txt"));
+    fresh.write_frame(0.5, k.grid, k.metrics, k.flow);
+    EXPECT_TRUE(std::filesystem::exists(dir / "fields_000000.vts"));
+    EXPECT_FALSE(std::filesystem::exists(dir / "fields_000001.vts"));
+}
+
+TEST(FieldSeries, FreshStartLeavesFilesAloneWhenTheOldListIsNotVeers) {
+    test::ScratchDir dir;
+    std::ofstream(dir / "fields.pvd") << "a user's notes, not a frame list\n";
+    std::ofstream(dir / "fields_000003.vts") << "the user's";
+    const FieldSeries fresh(dir.path(), SeriesStart::fresh);
+    EXPECT_TRUE(std::filesystem::exists(dir / "fields_000003.vts"));
+    EXPECT_TRUE(std::filesystem::exists(dir / "fields.pvd"));
+}
+
 TEST(FieldSeries, ForeignListIsRefusedWithItsName) {
     test::ScratchDir dir;
     std::ofstream(dir / "fields.pvd") << "frame 1 at t = 0.5\n";
