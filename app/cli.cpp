@@ -26,8 +26,7 @@ int print_error(const std::string& prefix, const std::string& message, int code)
 /// arguments is bad input (exit 2, one line), whatever code the parser would give.
 int parser_exit(CLI::App& app, const CLI::ParseError& e) {
     if (e.get_exit_code() == 0) return app.exit(e);
-    return print_error("veer: error: ", std::string(e.what()) + " (run `veer --help`)",
-                       exit_input);
+    return print_error("veer: error: ", std::string(e.what()) + " (run `veer --help`)", exit_input);
 }
 
 void add_case_options(CLI::App& sub, CaseOptions& o) {

@@ -38,7 +38,8 @@ std::string holder_of(int fd) {
 
 /// True when `fd` is still the file at `path` (a releasing run may have just removed it).
 bool same_file(int fd, const fs::path& path) {
-    struct stat open_file {}, named {};
+    struct stat open_file {
+    }, named{};
     return ::fstat(fd, &open_file) == 0 && ::stat(path.c_str(), &named) == 0 &&
            open_file.st_ino == named.st_ino && open_file.st_dev == named.st_dev;
 }

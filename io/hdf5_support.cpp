@@ -1,9 +1,9 @@
 #include "io/hdf5_support.hpp"
 
-#include "io/checksum.hpp"
-
 #include <algorithm>
 #include <cstring>
+
+#include "io/checksum.hpp"
 
 namespace veer::hdf5 {
 
@@ -121,9 +121,7 @@ void verify_checksum(hid_t dataset, const std::string& name, std::int64_t comput
 
 }  // namespace
 
-RequireChecksums::RequireChecksums() : m_previous(checksums_required) {
-    checksums_required = true;
-}
+RequireChecksums::RequireChecksums() : m_previous(checksums_required) { checksums_required = true; }
 
 RequireChecksums::~RequireChecksums() { checksums_required = m_previous; }
 

@@ -59,8 +59,8 @@ std::optional<double> cell_number(const std::string& cell) {
 std::vector<double> checked_row(const std::vector<std::string>& cells, std::size_t columns,
                                 long previous, const std::string& where) {
     if (cells.size() != columns)
-        throw InputError(fmt::format("{}: {} values; the header names {}; {}", where,
-                                     cells.size(), columns, history_remedy));
+        throw InputError(fmt::format("{}: {} values; the header names {}; {}", where, cells.size(),
+                                     columns, history_remedy));
     std::vector<double> values;
     for (const std::string& cell : cells) {
         const std::optional<double> v = cell_number(cell);
@@ -70,9 +70,10 @@ std::vector<double> checked_row(const std::vector<std::string>& cells, std::size
         values.push_back(*v);
     }
     if (values[0] != static_cast<double>(previous + 1))
-        throw InputError(fmt::format("{}: step {} follows step {} (rows are missing or out of "
-                                     "order); {}",
-                                     where, cells[0], previous, history_remedy));
+        throw InputError(
+            fmt::format("{}: step {} follows step {} (rows are missing or out of "
+                        "order); {}",
+                        where, cells[0], previous, history_remedy));
     return values;
 }
 
@@ -99,8 +100,8 @@ std::vector<std::string> rows_through(const std::filesystem::path& path, long la
         const std::string& line = lines[number - 1];
         if (line.empty()) continue;
         const std::vector<std::string> cells = split(line);
-        const std::vector<double> values = checked_row(
-            cells, names.size(), step, fmt::format("{}:{}", path.string(), number));
+        const std::vector<double> values =
+            checked_row(cells, names.size(), step, fmt::format("{}:{}", path.string(), number));
         step += 1;
         std::string row = cells[0];
         for (std::size_t c = 1; c < fixed_columns; ++c) row += "," + cells[c];
@@ -112,9 +113,10 @@ std::vector<std::string> rows_through(const std::filesystem::path& path, long la
         kept.cm.push_back(values[7]);
     }
     if (step < last_step)
-        throw InputError(fmt::format("{}: ends at step {}, but the checkpoint is at step {} (the "
-                                     "history was cut short); {}",
-                                     path.string(), step, last_step, history_remedy));
+        throw InputError(
+            fmt::format("{}: ends at step {}, but the checkpoint is at step {} (the "
+                        "history was cut short); {}",
+                        path.string(), step, last_step, history_remedy));
     return rows;
 }
 

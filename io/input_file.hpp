@@ -12,9 +12,9 @@
 namespace veer {
 
 /// Caps (bytes) for the kinds of file veer reads; generous for real inputs of each kind.
-inline constexpr std::uintmax_t case_file_cap = 1u << 20;          ///< a case file: 1 MiB
-inline constexpr std::uintmax_t coordinate_file_cap = 16u << 20;   ///< a section table: 16 MiB
-inline constexpr std::uintmax_t record_file_cap = 512u << 20;      ///< history, tables, JSON
+inline constexpr std::uintmax_t case_file_cap = 1u << 20;         ///< a case file: 1 MiB
+inline constexpr std::uintmax_t coordinate_file_cap = 16u << 20;  ///< a section table: 16 MiB
+inline constexpr std::uintmax_t record_file_cap = 512u << 20;     ///< history, tables, JSON
 
 /// The whole content of `path`, a regular file of at most `cap` bytes. `what` names the kind of
 /// file in messages ("case file", "coordinate file"). Throws InputError when the path is missing,

@@ -48,12 +48,12 @@ std::vector<DataPlace> data_places(const std::filesystem::path& file) {
     std::vector<DataPlace> places;
     const hid_t f = H5Fopen(file.c_str(), H5F_ACC_RDONLY, H5P_DEFAULT);
     EXPECT_GE(f, 0);
-    for (const std::string path : {"veer/mesh/node_x", "veer/mesh/node_y",
-                                   "veer/mesh/segment_begin", "veer/state/u",
-                                   "veer/state/pressure"}) {
+    for (const std::string path :
+         {"veer/mesh/node_x", "veer/mesh/node_y", "veer/mesh/segment_begin", "veer/state/u",
+          "veer/state/pressure"}) {
         const hid_t d = H5Dopen2(f, path.c_str(), H5P_DEFAULT);
-        places.push_back({path.substr(path.rfind('/') + 1), H5Dget_offset(d),
-                          H5Dget_storage_size(d)});
+        places.push_back(
+            {path.substr(path.rfind('/') + 1), H5Dget_offset(d), H5Dget_storage_size(d)});
         H5Dclose(d);
     }
     H5Fclose(f);
@@ -90,7 +90,8 @@ TEST(CheckpointIntegrity, AFlippedByteInAnyDatasetIsRefusedNamingTheDataset) {
         // First byte, a middle one and the last byte of the dataset's values.
         for (hsize_t at : {hsize_t{0}, place.bytes / 2 + 3, place.bytes - 1}) {
             const auto bad = dir / "bad.h5";
-            std::filesystem::copy_file(good, bad, std::filesystem::copy_options::overwrite_existing);
+            std::filesystem::copy_file(good, bad,
+                                       std::filesystem::copy_options::overwrite_existing);
             flip_byte(bad, place.offset + at);
             const std::string why = refusal_of(bad);
             EXPECT_NE(why.find("'" + place.name + "'"), std::string::npos)

@@ -164,9 +164,9 @@ TEST(CoordinateFile, AFarPointIsBlamedOnItsOwnLine) {
             const double x = 0.5 * (1.0 - std::cos(M_PI * q / n));
             const double t = 0.6 * (0.2969 * std::sqrt(x) - 0.1260 * x - 0.3516 * x * x +
                                     0.2843 * x * x * x - 0.1036 * x * x * x * x);
-            text += (q == 15 && side > 0) ? "1e308 0.01\n"  // the typing error, on line 17
-                                          : std::to_string(x) + " " + std::to_string(side * t) +
-                                                "\n";
+            text += (q == 15 && side > 0)
+                        ? "1e308 0.01\n"  // the typing error, on line 17
+                        : std::to_string(x) + " " + std::to_string(side * t) + "\n";
         }
     const std::string e = error_of(write_file("far_point.dat", text));
     EXPECT_NE(e.find("far_point.dat:17: point (1e+308, 0.01) lies far from all the others"),

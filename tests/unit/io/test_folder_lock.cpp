@@ -41,7 +41,7 @@ TEST(FolderLock, ReleasedWithItsOwnerAndStaleFilesAreTakenOver) {
 TEST(FolderLock, PrepareOutputDirHoldsTheLockAndRemovesStaleTemporaries) {
     test::ScratchDir dir;
     std::ofstream(dir / "history.csv.4242424.tmp") << "half a ro";  // a killed run's leftover
-    std::ofstream(dir / "notes.tmp") << "the user's";                // not ours: kept
+    std::ofstream(dir / "notes.tmp") << "the user's";               // not ours: kept
     const FolderLock held = prepare_output_dir(dir / ".", "case a", true);
     EXPECT_FALSE(std::filesystem::exists(dir / "history.csv.4242424.tmp"));
     EXPECT_TRUE(std::filesystem::exists(dir / "notes.tmp"));

@@ -16,8 +16,8 @@ namespace {
 const std::string header = "step,time,residual_u,residual_v,residual_continuity,cl,cd,cm\n";
 
 std::string row(int step) {
-    return std::to_string(step) + "," + std::to_string(0.01 * step) +
-           ",1e-3,2e-3,3e-4,0.41" + std::to_string(step) + ",0.02,-0.05\n";
+    return std::to_string(step) + "," + std::to_string(0.01 * step) + ",1e-3,2e-3,3e-4,0.41" +
+           std::to_string(step) + ",0.02,-0.05\n";
 }
 
 std::string history_of(int steps) {

@@ -68,10 +68,10 @@ TEST(JsonWriter, ErrorsNameTheFile) {
 TEST(AtomicFile, TemporaryNameSitsBesideTheTargetAndNamesTheProcess) {
     const std::filesystem::path t = temporary_path_for("/runs/a4/checkpoint.h5");
     // Two runs writing one target never share a temporary file: the name holds the pid.
-    EXPECT_EQ(t, std::filesystem::path("/runs/a4/checkpoint.h5." + std::to_string(::getpid()) +
-                                       ".tmp"));
+    EXPECT_EQ(
+        t, std::filesystem::path("/runs/a4/checkpoint.h5." + std::to_string(::getpid()) + ".tmp"));
     EXPECT_EQ(t, temporary_path_for("/runs/a4/checkpoint.h5"));  // stable within a process
-    EXPECT_FALSE(is_stale_temporary(t));                          // ours, not stale
+    EXPECT_FALSE(is_stale_temporary(t));                         // ours, not stale
     EXPECT_TRUE(is_stale_temporary("/runs/a4/checkpoint.h5.4242424.tmp"));
     EXPECT_FALSE(is_stale_temporary("/runs/a4/notes.tmp"));  // not a name veer writes
     EXPECT_FALSE(is_stale_temporary("/runs/a4/checkpoint.h5"));
