@@ -65,14 +65,28 @@ vtkSmartPointer<vtkPoints> to_vtk_points(const std::vector<Vec2>& points) {
 }
 
 // VTK prints errors to the console unless someone observes them; a library must not print, so
-// the messages are collected and become part of the exception.
+// the messages are collected and the first becomes part of the exception, as one short clause:
+// VTK's text is "ERROR: In FILE, line N\nCLASS (ADDRESS): WHAT\n" followed by a dump of the
+// pipeline request, of which only WHAT means anything to the user.
 struct ErrorCollector {
-    std::string messages;
+    std::string first;
     static void on_event(vtkObject*, unsigned long, void* self, void* call_data) {
         auto* me = static_cast<ErrorCollector*>(self);
-        if (call_data == nullptr) return;
-        if (!me->messages.empty()) me->messages += "; ";
-        me->messages += static_cast<const char*>(call_data);
+        if (call_data == nullptr || !me->first.empty()) return;
+        me->first = gist(static_cast<const char*>(call_data));
+    }
+    static std::string gist(std::string text) {
+        const std::size_t line_end = text.find('\n');
+        if (text.rfind("ERROR: In ", 0) == 0 || text.rfind("Warning: In ", 0) == 0)
+            text = line_end == std::string::npos ? text : text.substr(line_end + 1);
+        text = text.substr(0, text.find('\n'));
+        const std::size_t colon = text.find("): ");  // after "CLASS (ADDRESS)"
+        if (colon != std::string::npos) text = text.substr(colon + 3);
+        text = text.substr(0, text.find(" for request"));  // the pipeline dump that follows
+        for (std::size_t at; (at = text.find("(0x")) != std::string::npos;)  // object addresses
+            text.erase(at, text.find(')', at) == std::string::npos ? std::string::npos
+                                                                   : text.find(')', at) - at + 1);
+        return text.substr(0, 160);
     }
 };
 
@@ -102,8 +116,9 @@ void write_with(vtkXMLWriter* writer, vtkDataObject* data, const fs::path& path)
     if (ok != 1 || writer->GetErrorCode() != 0) {
         std::error_code ec;
         fs::remove(tmp, ec);
-        throw InputError(path.string() + ": cannot write the VTK file" +
-                         (errors.messages.empty() ? std::string() : ": " + errors.messages));
+        throw InputError(path.string() + ": cannot write the VTK file (" +
+                         (errors.first.empty() ? std::string("no reason given") : errors.first) +
+                         "); is the disk full?");
     }
     commit_temporary(tmp, path);
 }
