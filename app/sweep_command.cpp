@@ -5,6 +5,7 @@
 
 #include <chrono>
 #include <cmath>
+#include <cstdio>
 #include <optional>
 
 #include "app/commands.hpp"
@@ -174,11 +175,21 @@ int run_sweep(const SweepOptions& o, const SweepRanks& ranks) {
         }
     }
     const BlockResult mine = run_block(o, sweep, angles, mine_points, mesh.grid);
+    if (mine.interrupted && ranks.size() > 1) {
+        // Said before the collective calls below: when a rank was killed, the launcher stops the
+        // others (SIGTERM, which checkpoints like Ctrl-C) and they never get past those calls.
+        fmt::print(stderr,
+                   "veer: rank {} stopped (interrupted, or another rank ended) with its point "
+                   "checkpointed; run the same command again to resume the sweep\n",
+                   ranks.rank());
+        std::fflush(stderr);
+    }
     const bool interrupted = ranks.any(mine.interrupted);
     const std::vector<std::string> texts = ranks.gather_on_root(records_text(mine.records));
     if (!ranks.is_root()) return interrupted ? 130 : 0;
     if (interrupted) {
-        fmt::print(stderr, "veer: sweep interrupted; run the same command again to continue\n");
+        if (!mine.interrupted || ranks.size() == 1)
+            fmt::print(stderr, "veer: sweep interrupted; run the same command again to continue\n");
         return 130;
     }
     if (o.point_index >= 0) {
