@@ -9,6 +9,7 @@
 #include <optional>
 
 #include "app/commands.hpp"
+#include "app/error_line.hpp"
 #include "app/mesh_pipeline.hpp"
 #include "app/model_range_note.hpp"
 #include "app/polar_table.hpp"
@@ -216,7 +217,9 @@ int run_sweep_command(const SweepOptions& o) {
         try {
             code = run_sweep(o, ranks);
         } catch (const std::exception& e) {
-            fmt::print(stderr, "veer: error on rank {}: {}\n", ranks.rank(), e.what());
+            fmt::print(stderr, "{}\n",
+                       one_line(fmt::format("veer: error on rank {}: {}", ranks.rank(), e.what()),
+                                error_line_limit));
             std::fflush(stderr);
             ranks.abort(2);
             return 2;
