@@ -1,6 +1,7 @@
 #include "io/input_file.hpp"
 
 #include <fcntl.h>
+#include <fmt/format.h>
 #include <sys/stat.h>
 #include <unistd.h>
 
@@ -61,13 +62,13 @@ std::string read_input_file(const std::filesystem::path& path, std::string_view 
         const ssize_t got = ::read(file.fd, buffer, sizeof buffer);
         if (got < 0 && (errno == EINTR || errno == EAGAIN)) continue;
         if (got < 0)
-            throw InputError(name + ": reading the " + kind + " failed (" + std::strerror(errno) +
-                             ")");
+            throw InputError(
+                fmt::format("{}: reading the {} failed ({})", name, kind, std::strerror(errno)));
         if (got == 0) break;
         text.append(buffer, static_cast<std::size_t>(got));
         if (text.size() > cap)  // the file grew while being read
-            throw InputError(name + ": more than " + megabytes(cap) + " for a " + kind +
-                             "; is this the right file?");
+            throw InputError(fmt::format("{}: more than {} for a {}; is this the right file?", name,
+                                         megabytes(cap), kind));
     }
     return text;
 }

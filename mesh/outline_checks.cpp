@@ -163,14 +163,14 @@ void check_far_points(const RawOutline& raw) {
         std::nth_element(v.begin(), v.begin() + static_cast<std::ptrdiff_t>(v.size() / 2), v.end());
         return v[v.size() / 2];
     };
-    std::vector<double> xs, ys;
-    for (const Vec2& q : p) {
-        xs.push_back(q.x);
-        ys.push_back(q.y);
+    std::vector<double> xs(p.size()), ys(p.size()), reach(p.size());
+    for (std::size_t k = 0; k < p.size(); ++k) {
+        xs[k] = p[k].x;
+        ys[k] = p[k].y;
     }
     const double cx = median(xs), cy = median(ys);
-    std::vector<double> reach;  // halved before squaring: no overflow even at 1e308
-    for (const Vec2& q : p) reach.push_back(std::hypot(0.5 * (q.x - cx), 0.5 * (q.y - cy)));
+    for (std::size_t k = 0; k < p.size(); ++k)  // halved first: no overflow even at 1e308
+        reach[k] = std::hypot(0.5 * (p[k].x - cx), 0.5 * (p[k].y - cy));
     const double typical = median(reach);
     for (std::size_t k = 0; k < p.size(); ++k)
         if (!(reach[k] <= far_point_ratio * typical) && typical > 0.0)
