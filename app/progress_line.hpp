@@ -37,6 +37,9 @@ private:
     bool m_drawn = false;
 };
 
+/// The text of one progress line, `elapsed` seconds after the start.
+std::string progress_text(const ProgressFigures& f, double elapsed, const std::string& label);
+
 /// "1h02m", "3m05s", "12s".
 std::string format_duration(double seconds);
 
