@@ -4,9 +4,9 @@
 #include <gtest/gtest.h>
 
 #include <cstdio>
-#include <regex>
 #include <sstream>
 #include <string>
+#include <vector>
 
 #include "app/closing_table.hpp"
 #include "app/commands.hpp"
@@ -16,6 +16,48 @@
 
 namespace veer {
 namespace {
+
+// The page's text with every tag replaced by a line break (std::regex is avoided: GCC 12 warns
+// inside <regex> under the sanitizer build's -O1, and warnings are errors).
+std::string text_between_tags(const std::string& html) {
+    std::string text;
+    bool in_tag = false;
+    for (const char c : html) {
+        if (c == '<') in_tag = true;
+        if (!in_tag) text += c;
+        if (c == '>') {
+            in_tag = false;
+            text += '\n';
+        }
+    }
+    return text;
+}
+
+// The first line whose first non-blank character opens a JSON object or list ("" if none).
+std::string first_line_opening_json(const std::string& text) {
+    std::istringstream lines(text);
+    std::string line;
+    while (std::getline(lines, line)) {
+        const std::size_t first = line.find_first_not_of(" \t\r\f\v");
+        if (first != std::string::npos && (line[first] == '{' || line[first] == '[')) return line;
+    }
+    return "";
+}
+
+// The src of every <img src="..."> on the page.
+std::vector<std::string> image_sources(const std::string& html) {
+    const std::string opening = "<img src=\"";
+    std::vector<std::string> sources;
+    for (std::size_t at = html.find(opening); at != std::string::npos;
+         at = html.find(opening, at + 1)) {
+        const std::size_t begin = at + opening.size();
+        const std::size_t end = html.find('"', begin);
+        if (end == std::string::npos) break;
+        sources.push_back(html.substr(begin, end - begin));
+    }
+    return sources;
+}
+
 namespace fs = std::filesystem;
 
 RunAnalysis two_contours() {
@@ -130,19 +172,16 @@ TEST(ReaderOutput, SweepEndsWithTheCautionAndReportPageReadsAsText) {
     EXPECT_NE(html.find("0 to 2 deg (2 points)"), std::string::npos);
     // No raw JSON object, list or key: the text between tags never starts with { or [, and
     // the summary's keys are shown by their labels.
-    const std::string text = std::regex_replace(html, std::regex("<[^>]*>"), "\n");
-    EXPECT_FALSE(std::regex_search(text, std::regex(R"((^|\n)\s*[\{\[])")));
+    const std::string text = text_between_tags(html);
+    EXPECT_EQ(first_line_opening_json(text), "");
     EXPECT_EQ(html.find("{&quot;"), std::string::npos);
     for (const char* key : {"alpha_cd_min", "linear_range", "missing_points", "lift_slope_per_deg",
                             "trailing_edge_closure"})
         EXPECT_EQ(text.find(key), std::string::npos) << key;
     // Every picture the page names exists and is a PNG.
-    const std::regex img("<img src=\"([^\"]+)\"");
-    int pictures = 0;
-    for (auto it = std::sregex_iterator(html.begin(), html.end(), img);
-         it != std::sregex_iterator(); ++it, ++pictures)
-        EXPECT_TRUE(test::is_png(tmp / "sw" / (*it)[1].str())) << (*it)[1].str();
-    EXPECT_GE(pictures, 5);
+    const std::vector<std::string> pictures = image_sources(html);
+    EXPECT_GE(pictures.size(), 5U);
+    for (const std::string& src : pictures) EXPECT_TRUE(test::is_png(tmp / "sw" / src)) << src;
 }
 
 }  // namespace
