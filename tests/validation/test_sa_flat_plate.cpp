@@ -21,7 +21,7 @@
 #include <iostream>
 
 #include "../verification/sa_plate_run.hpp"
-#include "test_sa_gci.hpp"
+#include "postprocess/grid_convergence.hpp"
 #include "tests/reference_table.hpp"
 
 namespace veer {
@@ -65,12 +65,13 @@ TEST(SaFlatPlate, SkinFrictionAgainstTmrWithGridConvergence) {
                   << " (" << 100.0 * (finest.cf[k] / law - 1.0) << "%)\n";
     }
 
-    const test::GciResult g = test::grid_convergence_index(h, cf);
+    const GridConvergence g = grid_convergence(h, cf);
     std::cout << "  GCI: refinement ratios " << h[1] / h[0] << ", " << h[2] / h[1]
               << "; p = " << g.order << ", extrapolated " << g.extrapolated << " ("
               << 100.0 * (g.extrapolated / tmr_cf - 1.0)
               << "% from TMR), GCI_fine = " << 100.0 * g.gci_fine << "%"
-              << (g.oscillatory ? " (oscillatory)" : "") << "\n";
+              << " (" << verdict_name(g.verdict) << ")"
+              << "\n";
     // The fine grid's numerical uncertainty must be well inside the 2% validation band, and the
     // extrapolated value within the band too.
     EXPECT_LT(g.gci_fine, 0.01);

@@ -18,7 +18,7 @@
 ///   suction peak), so the check uses this finer one. Labelled validation, not run by default.
 /// - Grid convergence at alpha = 10: a family of three grids refined by 4/3 in both directions
 ///   (first cell too: y+ 1, 4/3, 16/9), Cl and Cd with the grid convergence index of Celik et al.
-///   2008 (test_sa_gci.hpp), printed as a table.
+///   2008 (postprocess/grid_convergence.hpp), printed as a table.
 /// Solver settings are SolverSettings' defaults, which are also `veer run`'s for these cases
 /// (pseudo CFL 2 with the model, solver_settings.hpp).
 #include <gtest/gtest.h>
@@ -40,10 +40,10 @@
 #include "mesh/section_builder.hpp"
 #include "mesh/surface_sampling.hpp"
 #include "mesh/wall_spacing.hpp"
+#include "postprocess/grid_convergence.hpp"
 #include "postprocess/surface_forces.hpp"
 #include "solver/flow_solver.hpp"
 #include "solver/spalart_allmaras_model.hpp"
-#include "test_sa_gci.hpp"
 #include "tests/reference_table.hpp"
 
 namespace veer {
@@ -206,14 +206,14 @@ TEST(SaNaca0012, GridConvergenceAtTenDegrees) {
         std::cout << "| " << level << " | " << grid.ni() << " x " << grid.nj() << " | " << h[k]
                   << " | " << r.steps << " | " << cl[k] << " | " << cd[k] << " |\n";
     }
-    const test::GciResult gl = test::grid_convergence_index(h, cl);
-    const test::GciResult gd = test::grid_convergence_index(h, cd);
-    std::cout << "| quantity | p | extrapolated | e_a (fine) | GCI_fine | oscillatory |\n"
+    const GridConvergence gl = grid_convergence(h, cl);
+    const GridConvergence gd = grid_convergence(h, cd);
+    std::cout << "| quantity | p | extrapolated | e_a (fine) | GCI_fine | verdict |\n"
               << "|---|---|---|---|---|---|\n"
               << "| Cl | " << gl.order << " | " << gl.extrapolated << " | " << gl.relative_error
-              << " | " << 100.0 * gl.gci_fine << "% | " << gl.oscillatory << " |\n"
+              << " | " << 100.0 * gl.gci_fine << "% | " << verdict_name(gl.verdict) << " |\n"
               << "| Cd | " << gd.order << " | " << gd.extrapolated << " | " << gd.relative_error
-              << " | " << 100.0 * gd.gci_fine << "% | " << gd.oscillatory << " |\n";
+              << " | " << 100.0 * gd.gci_fine << "% | " << verdict_name(gd.verdict) << " |\n";
     // The band comparison above only means something if the numerical uncertainty of the
     // benchmark grid is inside its tolerance, the TMR codes' spread at 10 degrees relative to
     // their mean: 1.0% on Cl (0.0109 / 1.0935), 1.6% on Cd (0.0002 / 0.01236).
@@ -225,15 +225,20 @@ TEST(SaNaca0012, GridConvergenceAtTenDegrees) {
         (tmr.number(ten, "cd_max") - tmr.number(ten, "cd_min")) / tmr.number(ten, "cd_mean");
     std::cout << "TMR codes' spread at 10 deg: Cl " << 100.0 * cl_spread << "%, Cd "
               << 100.0 * cd_spread << "%\n";
-    EXPECT_LT(gl.gci_fine, cl_spread);  // measured 0.13%
-    // Cd falls short of that: GCI_fine measured 2.2%, with an observed order 3.2 above the
-    // formal 2, so the two coarser grids are not yet in the asymptotic range (Celik et al. 2008
-    // ask to report it so). The Cd band check above therefore holds only to within our own
-    // numerical uncertainty, which is larger than the codes' spread; a finer family (the
-    // resource's 897 x 257 and beyond) would be needed to bring it inside, and does not fit this
-    // suite's time. The gate keeps that uncertainty from growing unseen: below 3%, not quite
-    // twice the codes' spread (it was 5% before the bands were tightened).
-    EXPECT_LT(gd.gci_fine, 0.03);
+    // Cl: measured 0.13% with the factor of safety 1.25 at the observed order 3.3; that order is
+    // outside [1, 3], so the band is now the conservative one (factor 3, order 2), by the same
+    // figures about five times larger, 0.6% (estimated from the recorded e_a, not re-measured).
+    EXPECT_LT(gl.gci_fine, cl_spread);
+    // Cd falls short of that: with an observed order 3.2 above the formal 2 the two coarser grids
+    // are not yet in the asymptotic range (Celik et al. 2008 ask to report it so), and the band is
+    // the conservative one: e_a 2.7% gives 3 x 2.7% / (r21^2 - 1) = 10% (it was 2.2% with the
+    // factor 1.25 at p = 3.2 before grid_convergence refused that order). The Cd band check above
+    // therefore holds only to within our own numerical uncertainty, which is larger than the codes'
+    // spread; a finer family (the resource's 897 x 257 and beyond) would be needed to bring it
+    // inside, and does not fit this suite's time. The gate keeps that uncertainty from growing
+    // unseen: 12%, a sixth above the estimate (widened from 3% because the band's rule changed,
+    // not the solution).
+    EXPECT_LT(gd.gci_fine, 0.12);
 }
 
 }  // namespace
