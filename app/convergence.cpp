@@ -4,6 +4,7 @@
 #include <cmath>
 #include <limits>
 
+#include "app/geometric_tail.hpp"
 #include "mesh/errors.hpp"
 
 namespace veer {
@@ -37,7 +38,20 @@ bool ConvergenceMonitor::add(const ConvergenceSample& s) {
         m_cd.pop_front();
     }
     if (m_count <= m_criteria.reference_steps) return false;
-    return m_relative <= m_criteria.residual_drop && force_change() <= m_criteria.force_tolerance;
+    if (m_relative > m_criteria.residual_drop) return false;
+    return force_change() <= m_criteria.force_tolerance || forces_settling();
+}
+
+bool ConvergenceMonitor::forces_settling() const {
+    const int block = m_criteria.tail_block;
+    if (block <= 0 || 3 * block > m_criteria.force_window) return false;
+    const double limit = m_criteria.tail_fraction * m_criteria.force_tolerance;
+    for (const std::deque<double>* d : {&m_cl, &m_cd}) {
+        if (geometric_tail(*d, block, m_criteria.tail_ratio_max) > limit) return false;
+        const double last_block = std::abs(d->back() - (*d)[d->size() - 1 - block]);
+        if (last_block > m_criteria.force_tolerance) return false;
+    }
+    return true;
 }
 
 void ConvergenceMonitor::raise_references(const std::vector<double>& floor) {

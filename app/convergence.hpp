@@ -1,6 +1,8 @@
 #pragma once
 /// Decides when a steady run has converged: residuals fallen by the requested factor from their
-/// reference (the largest of the first steps) and Cl, Cd settled over a window of steps. The
+/// reference (the largest of the first steps) and Cl, Cd settled: either moved less than the
+/// tolerance over a window of steps, or settling geometrically with an estimated remaining
+/// change (app/geometric_tail.hpp) below a fraction of the tolerance. The
 /// residuals are those of every equation solved: u, v, continuity, then each transported
 /// variable of the turbulence model (a residual that stays 0 is left out).
 #include <deque>
@@ -15,6 +17,14 @@ struct ConvergenceCriteria {
     double force_tolerance = 1e-5;  ///< max |change| of Cl and Cd across the window
     int reference_steps = 20;       ///< the reference is the largest residual of these steps
     int force_window = 100;         ///< steps over which the forces must have settled
+    /// Steps per block of the remaining-change estimate (three blocks are read); 0, or more
+    /// than a third of the force window: the window alone decides.
+    int tail_block = 10;
+    /// The estimated remaining change of Cl and Cd must be below this fraction of
+    /// force_tolerance (and their change over the last block below force_tolerance).
+    double tail_fraction = 0.1;
+    /// A block-to-block ratio of the changes above this is too slow to extrapolate.
+    double tail_ratio_max = 0.9;
 };
 
 /// One step's figures as the monitor sees them.
@@ -43,6 +53,9 @@ public:
     double relative_residual() const { return m_relative; }
     /// Largest change of Cl or Cd over the current window (infinity until the window is full).
     double force_change() const;
+    /// True when Cl and Cd settle geometrically with an estimated remaining change below
+    /// tail_fraction x force_tolerance (ConvergenceCriteria::tail_block).
+    bool forces_settling() const;
     /// True when the residuals have grown far past their reference (a blow-up).
     bool blowing_up() const { return m_relative > 1e6; }
 

@@ -25,6 +25,7 @@ ConvergenceCriteria criteria_for(const RunSpec& run) {
     ConvergenceCriteria c;
     c.residual_drop = run.residual_drop;
     c.force_tolerance = run.force_tolerance;
+    if (!run.settle_estimate) c.tail_block = 0;
     return c;
 }
 

@@ -1,11 +1,14 @@
 // The steady schemes side by side (solver/steady_scheme.hpp): each point run to convergence
-// through the Simulation, as `veer run` runs it, once with "classic" and once with "fast", each
-// run in a process of its own (so that its peak memory is its own). Prints per point and scheme:
-// steps, wall and processor time, Cl, Cd, memory per cell; then the ratios classic / fast and the
-// Cl, Cd differences. Targets (issue 20): NACA 0012 alpha 10 in at most a quarter of the classic
-// steps and 15 s on 2 cores, Cl and Cd within 0.1 %; no point slower; memory under 2 KB per cell.
-// Prints figures; it is not a test. Wall times depend on what else runs on the machine: compare
-// the ratios of one run, and the processor times.
+// through the Simulation, as `veer run` runs it, each run in a process of its own (so that its
+// peak memory is its own): "classic" and "fast-window" stopped by the 100-step force window
+// alone (`settle_estimate = false`, the criterion before the estimate), "fast" as `veer run`
+// runs it (the window or the remaining-change estimate, app/geometric_tail.hpp). Prints per
+// point and run: steps, wall and processor time, Cl, Cd, memory per cell; then the ratios
+// classic / fast and the Cl, Cd differences from classic (those of "fast-window" show what the
+// estimate's earlier stop costs). Targets (issue 20): NACA 0012 alpha 10 in at most a quarter of
+// the classic steps and 15 s on 2 cores, Cl and Cd within 0.1 %; no point slower; memory under 2 KB
+// per cell. Prints figures; it is not a test. Wall times depend on what else runs on the machine:
+// compare the ratios of one run, and the processor times.
 //
 //   bench_steady_schemes [POINT ...]      points: a0 a10 a15 (NACA 0012, Re 6e6, 384 x 128, y+ 1,
 //                                         far field 100), turbine (cases/wind-turbine-section-
@@ -34,8 +37,13 @@ namespace fs = std::filesystem;
 const fs::path cases_dir = fs::path(VEER_SOURCE_DIR) / "cases";
 const std::vector<std::string> all_points = {"a0", "a10", "a15", "turbine", "demo"};
 
-veer::CaseSpec point_case(const std::string& point, const std::string& scheme) {
-    const std::vector<std::string> set = {"run.steady_scheme=\"" + scheme + "\""};
+/// "classic", "fast-window" (both stopped by the force window alone) or "fast".
+veer::CaseSpec point_case(const std::string& point, const std::string& run) {
+    const bool window_only = run != "fast";
+    const std::string scheme = run == "classic" ? "classic" : "fast";
+    const std::vector<std::string> set = {
+        "run.steady_scheme=\"" + scheme + "\"",
+        std::string("run.settle_estimate=") + (window_only ? "false" : "true")};
     if (point == "turbine")
         return veer::read_case_file(cases_dir / "wind-turbine-section-sa.toml", set);
     if (point == "demo") return veer::read_case_file(cases_dir / "indoor-flyer-laminar.toml", set);
@@ -90,7 +98,7 @@ RunFigures run_child(const char* self, const std::string& scheme, const std::str
 
 void print_run(const std::string& scheme, const RunFigures& f) {
     fmt::print(
-        "  {:8} {:>15} {:6} steps {:7.1f} s wall {:7.1f} s cpu  Cl {:.5f}  Cd {:.6f}  "
+        "  {:11} {:>15} {:6} steps {:7.1f} s wall {:7.1f} s cpu  Cl {:.5f}  Cd {:.6f}  "
         "{:.2f} KB/cell{}\n",
         scheme, f.converged ? "converged" : "NOT converged", f.steps, f.wall, f.processor, f.cl,
         f.cd, f.kb_per_cell,
@@ -112,9 +120,11 @@ int main(int argc, char** argv) {
                    c.flow.alpha_deg, c.flow.reynolds);
         const RunFigures classic = run_child(argv[0], "classic", p);
         print_run("classic", classic);
+        const RunFigures window = run_child(argv[0], "fast-window", p);
+        print_run("fast-window", window);
         const RunFigures fast = run_child(argv[0], "fast", p);
         print_run("fast", fast);
-        if (!classic.converged || !fast.converged || fast.steps == 0) {
+        if (!classic.converged || !fast.converged || !window.converged || fast.steps == 0) {
             status = 1;
             continue;
         }
@@ -130,6 +140,9 @@ int main(int argc, char** argv) {
             classic.wall / fast.wall, classic.processor / fast.processor, fast.cl - classic.cl,
             percent(fast.cl - classic.cl, classic.cl), fast.cd - classic.cd,
             percent(fast.cd - classic.cd, classic.cd));
+        fmt::print("  fast-window - classic: Cl {:+.2e}{}, Cd {:+.2e}{}\n", window.cl - classic.cl,
+                   percent(window.cl - classic.cl, classic.cl), window.cd - classic.cd,
+                   percent(window.cd - classic.cd, classic.cd));
     }
     return status;
 }

@@ -274,6 +274,8 @@ void read_run(const toml::table* t, const std::string& source, CaseSpec& c) {
                             .value_or(run.residual_drop);
     run.force_tolerance = r.number("force_tolerance", 1e-12, 0.1, "a change from 1e-12 to 0.1")
                               .value_or(run.force_tolerance);
+    if (const auto estimate = r.flag("settle_estimate", "true or false"))
+        run.settle_estimate = *estimate;
     run.output_every =
         r.integer("output_every", 0, 100000000, "a step interval (0: first and last)")
             .value_or(run.output_every);
@@ -285,8 +287,8 @@ void read_run(const toml::table* t, const std::string& source, CaseSpec& c) {
         run.steady_scheme = steady_scheme_of(*scheme);
     const auto spin = r.number("start_spin", 0.0, 2.0, "a surface speed from 0 to 2");
     r.reject_unknown(
-        "mode, steps, end_time, cfl, residual_drop, force_tolerance, output_every, "
-        "checkpoint_every, pressure_solver, steady_scheme, start_spin");
+        "mode, steps, end_time, cfl, residual_drop, force_tolerance, settle_estimate, "
+        "output_every, checkpoint_every, pressure_solver, steady_scheme, start_spin");
     if (spin && *spin > 0.0 && !c.geometry.circle)
         r.fail(*t->get("start_spin"), "start_spin", fmt::format("{}", *spin),
                "0 unless [geometry] circle = true (only a circle can spin in place)");

@@ -39,8 +39,12 @@ struct RunSpec {
     double cfl = 0.0;               ///< 0: the solver's default for the mode
     double residual_drop = 1e-6;    ///< steady: residuals must fall by this factor
     double force_tolerance = 1e-5;  ///< steady: Cl, Cd change per 100 steps below this
-    long output_every = 0;          ///< field frame interval in steps; 0: first and last only
-    long checkpoint_every = 500;    ///< checkpoint interval in steps
+    /// steady: Cl and Cd also count as settled when they settle geometrically with an estimated
+    /// remaining change below a tenth of force_tolerance (app/geometric_tail.hpp); false: only
+    /// the 100-step window decides.
+    bool settle_estimate = true;
+    long output_every = 0;        ///< field frame interval in steps; 0: first and last only
+    long checkpoint_every = 500;  ///< checkpoint interval in steps
     PressureSolverKind pressure_solver = PressureSolverKind::multigrid;
     SteadyScheme steady_scheme = SteadyScheme::fast;  ///< steady: the path (same result)
     /// Circle, unsteady: surface speed (free-stream units) of a brief counter-clockwise spin of

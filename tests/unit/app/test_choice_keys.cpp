@@ -155,28 +155,13 @@ TEST(ChoiceKeys, CheckAndRunAgreeOnEveryValueOfEveryOtherKey) {
     // failed run).
     test::AppScratch scratch;
     test::write_text(scratch / "tiny.toml", test::tiny_case_text());
-    const std::vector<std::string> keys = {"geometry.naca",
-                                           "geometry.circle",
-                                           "geometry.name",
-                                           "mesh.around",
-                                           "mesh.normal",
-                                           "mesh.wake",
-                                           "mesh.far_field",
-                                           "mesh.first_cell",
-                                           "mesh.y_plus",
-                                           "mesh.max_growth",
-                                           "flow.reynolds",
-                                           "flow.alpha",
-                                           "run.steps",
-                                           "run.end_time",
-                                           "run.cfl",
-                                           "run.residual_drop",
-                                           "run.force_tolerance",
-                                           "run.output_every",
-                                           "run.checkpoint_every",
-                                           "run.start_spin",
-                                           "post.contours",
-                                           "post.wake_stations"};
+    const std::vector<std::string> keys = {
+        "geometry.naca",       "geometry.circle",     "geometry.name",     "mesh.around",
+        "mesh.normal",         "mesh.wake",           "mesh.far_field",    "mesh.first_cell",
+        "mesh.y_plus",         "mesh.max_growth",     "flow.reynolds",     "flow.alpha",
+        "run.steps",           "run.end_time",        "run.cfl",           "run.residual_drop",
+        "run.force_tolerance", "run.settle_estimate", "run.output_every",  "run.checkpoint_every",
+        "run.start_spin",      "post.contours",       "post.wake_stations"};
     // [50.0]: a contour or wake station beyond the tiny grid's far field (10 chords), a rule
     // only the run's set-up knows.
     const std::vector<std::string> values = {"0",     "-1",     "1e-3",  "0.5",  "3",     "50",
@@ -189,7 +174,7 @@ TEST(ChoiceKeys, CheckAndRunAgreeOnEveryValueOfEveryOtherKey) {
             agreed += v.check == v.run;
             accepted_values += v.check && v.run;
         }
-    EXPECT_EQ(agreed, 22 * 12);
+    EXPECT_EQ(agreed, 23 * 12);
     // Some values must pass both (e.g. mesh.far_field = 3, run.cfl = 3), or the comparison
     // would only show that both refuse everything.
     std::printf("check and run agree on %d key values, %d accepted by both\n", agreed,
