@@ -100,6 +100,17 @@ TEST(CaseFile, SteadySchemeIsFastUnlessTheCaseAsksForClassic) {
     EXPECT_NE(msg.find("\"classic\" or \"fast\""), std::string::npos) << msg;
 }
 
+TEST(CaseFile, SettleEstimateIsOnUnlessTheCaseTurnsItOff) {
+    EXPECT_TRUE(parse_case_text(minimal_case, "case.toml", ".").run.settle_estimate);
+    const std::string off = std::string(minimal_case) + "[run]\nsettle_estimate = false\n";
+    EXPECT_FALSE(parse_case_text(off, "case.toml", ".").run.settle_estimate);
+    const std::string msg =
+        error_of(std::string(minimal_case) + "[run]\nsettle_estimate = \"no\"\n");
+    EXPECT_NE(msg.find("case.toml:14"), std::string::npos) << msg;
+    EXPECT_NE(msg.find("settle_estimate"), std::string::npos) << msg;
+    EXPECT_NE(msg.find("true or false"), std::string::npos) << msg;
+}
+
 TEST(CaseFile, GeometryNeedsExactlyOneSource) {
     std::string text = minimal_case;
     text.replace(text.find("naca = \"0012\""), 13, "");
