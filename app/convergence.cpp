@@ -16,6 +16,14 @@ constexpr double record_with_four = -2.0;     // marker, count, 4 references, re
 constexpr std::size_t oldest_references = 3;  // count, 3 references, relative
 }  // namespace
 
+ConvergenceCriteria convergence_criteria(const RunSpec& run) {
+    ConvergenceCriteria c;
+    c.residual_drop = run.residual_drop;
+    c.force_tolerance = run.force_tolerance;
+    if (!run.settle_estimate) c.tail_block = 0;
+    return c;
+}
+
 std::vector<double> step_residuals(const StepReport& step) {
     std::vector<double> r = {step.residual_u, step.residual_v, step.residual_continuity};
     r.insert(r.end(), step.model_residuals.begin(), step.model_residuals.end());

@@ -8,6 +8,7 @@
 #include <deque>
 #include <vector>
 
+#include "io/case_spec.hpp"
 #include "solver/flow_solver.hpp"
 
 namespace veer {
@@ -26,6 +27,9 @@ struct ConvergenceCriteria {
     /// A block-to-block ratio of the changes above this is too slow to extrapolate.
     double tail_ratio_max = 0.9;
 };
+
+/// The criteria of a case's [run] table (residual_drop, force_tolerance, settle_estimate).
+ConvergenceCriteria convergence_criteria(const RunSpec& run);
 
 /// One step's figures as the monitor sees them.
 struct ConvergenceSample {

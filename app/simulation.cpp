@@ -21,14 +21,6 @@ namespace {
 
 constexpr const char* convergence_record = "simulation_convergence";
 
-ConvergenceCriteria criteria_for(const RunSpec& run) {
-    ConvergenceCriteria c;
-    c.residual_drop = run.residual_drop;
-    c.force_tolerance = run.force_tolerance;
-    if (!run.settle_estimate) c.tail_block = 0;
-    return c;
-}
-
 bool is_steady(const CaseSpec& spec) { return spec.run.mode == TimeMode::steady; }
 
 /// How long the start spin of a circle lasts (free-stream time units, diameters / U_inf): about
@@ -100,7 +92,7 @@ Simulation::Simulation(const CaseSpec& spec, StructuredGrid grid, std::filesyste
       m_out(std::move(out_dir)),
       m_options(std::move(options)),
       m_solver(std::make_unique<FlowSolver>(m_grid, spec.flow, solver_settings_for(spec))),
-      m_monitor(criteria_for(spec.run)) {
+      m_monitor(convergence_criteria(spec.run)) {
     if (!m_grid.c_layout()) return;  // verification blocks: no section to analyse
     // A contour or wake station the grid cannot hold is refused now, not after the run.
     try {
@@ -123,7 +115,7 @@ void Simulation::resume(const CheckpointData& checkpoint) {
     // A record from before the model's residual was monitored has no reference for it; past the
     // reference steps it cannot be rebuilt, and guessing one would change what "converged" means.
     if (m_monitor.legacy_record() && !m_solver->model_variables().empty() &&
-        m_monitor.count() > criteria_for(m_spec.run).reference_steps) {
+        m_monitor.count() > convergence_criteria(m_spec.run).reference_steps) {
         std::string names;
         for (const ModelVariable& v : m_solver->model_variables())
             names += (names.empty() ? "" : ", ") + v.name;
@@ -143,7 +135,7 @@ void Simulation::start_from(const FlowFields& initial) {
     if (is_steady(m_spec))
         m_monitor.raise_references(
             free_stream_references(m_grid, m_spec.flow, solver_settings_for(m_spec),
-                                   criteria_for(m_spec.run).reference_steps));
+                                   convergence_criteria(m_spec.run).reference_steps));
 }
 
 double Simulation::nominal_time_step() const {

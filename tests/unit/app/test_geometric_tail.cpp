@@ -78,6 +78,23 @@ TEST(ConvergenceMonitor, GeometricSettlingStopsWithinTheToleranceBeforeTheWindow
     EXPECT_LE(std::abs(at_window - 1.08), 0.011 * window.force_tolerance);
 }
 
+TEST(ConvergenceMonitor, CaseKeysSetTheCriteria) {
+    RunSpec run;
+    run.residual_drop = 1e-8;
+    run.force_tolerance = 2e-6;
+    const ConvergenceCriteria on = convergence_criteria(run);
+    EXPECT_EQ(on.residual_drop, 1e-8);
+    EXPECT_EQ(on.force_tolerance, 2e-6);
+    EXPECT_GT(on.tail_block, 0);
+    run.settle_estimate = false;
+    EXPECT_EQ(convergence_criteria(run).tail_block, 0) << "the window alone";
+    // And a window-only monitor runs a geometric settling on to the window's stop.
+    auto cl = [](int n) { return 1.0 + 0.1 * std::pow(0.955, n); };
+    double at_on = 0.0, at_off = 0.0;
+    EXPECT_LT(stop_step(on, cl, 3000, at_on),
+              stop_step(convergence_criteria(run), cl, 3000, at_off));
+}
+
 TEST(ConvergenceMonitor, OscillationTheWindowKeepsRunningIsNotStoppedByTheEstimate) {
     // Cl oscillating by 1e-4 with periods of 30 to 500 steps and any phase: it moves by at least
     // 1.9e-5 over any 100 steps, so the window (1e-5) never stops it, and the estimate must not
