@@ -14,6 +14,7 @@
 #include <array>
 #include <cmath>
 #include <iostream>
+#include <memory>
 #include <vector>
 
 #include "../reference_table.hpp"
@@ -24,6 +25,8 @@
 #include "solver/boundary_ghosts.hpp"
 #include "solver/connectivity.hpp"
 #include "solver/face_geometry.hpp"
+#include "solver/flow_model.hpp"
+#include "solver/sa_aft_model.hpp"
 #include "solver/transition_correlations.hpp"
 #include "solver/transition_flow_quantities.hpp"
 
@@ -133,6 +136,29 @@ TEST(TransitionFlowQuantities, ShapeFactorEstimateAndVorticityOnTheBlasiusLayer)
     std::cout << "at x " << x_line << ": max Re_v / Re_theta " << largest_re_v / re_theta
               << " (SA-BCM divides by " << BcmConstants::re_v_to_re_theta << ")\n";
     EXPECT_NEAR(largest_re_v / re_theta, BcmConstants::re_v_to_re_theta, 0.02 * 2.193);
+    // The model's output field "shape_factor_estimate" after one step on this velocity: H12 of
+    // the same H_L (aft_shape_factor), cell by cell. Zero face fluxes: only the local
+    // quantities matter here.
+    const std::unique_ptr<FlowModel> aft =
+        sa_aft_descriptor().make(ModelSetup{grid, metrics, geom, faces, connectivity, nu, {}});
+    const std::vector<double> no_flux_i(geom.i_faces.area.size(), 0.0),
+        no_flux_j(geom.j_faces.area.size(), 0.0);
+    CellField dt(grid.ni(), grid.nj(), 1e-6);
+    ModelStepInputs in;
+    in.u = u.view();
+    in.v = v.view();
+    in.flux_i = &no_flux_i;
+    in.flux_j = &no_flux_j;
+    in.local_dt = dt.view();
+    aft->advance(in);
+    const std::vector<NamedArray> fields = aft->output_fields();
+    const auto h12 = std::find_if(fields.begin(), fields.end(), [](const NamedArray& a) {
+        return a.name == "shape_factor_estimate";
+    });
+    ASSERT_NE(h12, fields.end());
+    ASSERT_EQ(h12->values.size(), q.shape_estimate().size());
+    for (std::size_t k = 0; k < h12->values.size(); ++k)
+        ASSERT_EQ(h12->values[k], aft_shape_factor(q.shape_estimate()[k])) << k;
     std::cout << "compared " << compared << " cells: worst |H_L - eta^3 f''/2| " << worst_h
               << ", worst relative vorticity error " << worst_omega << "\n";
     EXPECT_GT(compared, 200);
