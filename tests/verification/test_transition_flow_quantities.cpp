@@ -144,13 +144,7 @@ TEST(TransitionFlowQuantities, ShapeFactorEstimateAndVorticityOnTheBlasiusLayer)
     const std::vector<double> no_flux_i(geom.i_faces.area.size(), 0.0),
         no_flux_j(geom.j_faces.area.size(), 0.0);
     CellField dt(grid.ni(), grid.nj(), 1e-6);
-    ModelStepInputs in;
-    in.u = u.view();
-    in.v = v.view();
-    in.flux_i = &no_flux_i;
-    in.flux_j = &no_flux_j;
-    in.local_dt = dt.view();
-    aft->advance(in);
+    aft->advance(ModelStepInputs{u.view(), v.view(), &no_flux_i, &no_flux_j, dt.view()});
     const std::vector<NamedArray> fields = aft->output_fields();
     const auto h12 = std::find_if(fields.begin(), fields.end(), [](const NamedArray& a) {
         return a.name == "shape_factor_estimate";
