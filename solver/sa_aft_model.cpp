@@ -92,7 +92,11 @@ public:
         std::vector<double> gamma = m_g.values();
         for (std::size_t k = 0; k < gamma.size(); ++k)
             gamma[k] = m_zones[k] == TripZone::turbulent ? 1.0 : std::exp(gamma[k]);
-        return {{"intermittency", gamma}};
+        // H12 as the model estimates it from the local flow (aft_shape_factor of H_L): the
+        // quantity its stability correlations read, to compare with a boundary-layer solution.
+        std::vector<double> h12 = m_flow.shape_estimate();
+        for (double& h : h12) h = aft_shape_factor(h);
+        return {{"intermittency", gamma}, {"shape_factor_estimate", h12}};
     }
 
 private:

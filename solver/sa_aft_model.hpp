@@ -5,7 +5,8 @@
 /// variables: nu_tilde ("nu~", far field 0.1 nu), the amplification factor n~
 /// ("amplification", far field 0, zero normal gradient at walls, kept >= 0) and the
 /// log-intermittency g~ ("log_intermittency", far field 0, zero normal gradient at walls, kept
-/// <= 0); output field "intermittency" = exp(g~) (1 behind a trip).
+/// <= 0); output fields "intermittency" = exp(g~) (1 behind a trip) and
+/// "shape_factor_estimate", the H12 the correlations read (from H_L of the last step).
 ///
 /// One step: f_t2 = c_t3 (1 - exp(g~)) per cell (0 behind a trip: whichever of the trip and free
 /// transition comes first), the nu_tilde step, then Omega, S and H_L from the new velocity and

@@ -4,6 +4,7 @@
 /// normal, far field 60 chords, first cell at y+ 1 (the wake default), steady, the case files'
 /// default scheme and criteria. Each run is computed once per build (computed_once.hpp) and
 /// shared by the tests that read it.
+#include <cmath>
 #include <filesystem>
 #include <fstream>
 #include <sstream>
@@ -21,15 +22,25 @@ struct SectionRun {
     double cl = 0.0, cd = 0.0;
     long iterations = 0;
     bool converged = false;
+    /// Transition x/c on each surface; NaN where summary.json gives none.
+    double transition_upper = std::nan(""), transition_lower = std::nan("");
 };
 
-/// The case text of one point; `flow_keys` are further [flow] lines (model options).
+/// `key` of summary.json as a number, NaN where it is absent or not a number.
+inline double number_or_nan(const nlohmann::json& s, const char* key) {
+    return s.contains(key) && s.at(key).is_number() ? s.at(key).get<double>() : std::nan("");
+}
+
+/// The case text of one point; `flow_keys` are further [flow] lines (model options); `wall`
+/// the [mesh] line of the first cell (y+ 1 by default; a first_cell line for a grid family).
 inline std::string naca0012_case(double reynolds, double alpha, const std::string& model,
-                                 const std::string& flow_keys, int around = 320, int normal = 112) {
+                                 const std::string& flow_keys, int around = 320, int normal = 112,
+                                 const std::string& wall = "y_plus = 1.0") {
     std::ostringstream s;
     s << "[geometry]\nnaca = \"0012\"\n[mesh]\naround = " << around << "\nnormal = " << normal
-      << "\nfar_field = 60\ny_plus = 1.0\n[flow]\nreynolds = " << reynolds << "\nalpha = " << alpha
-      << "\nmodel = \"" << model << "\"\n"
+      << "\nfar_field = 60\n"
+      << wall << "\n[flow]\nreynolds = " << reynolds << "\nalpha = " << alpha << "\nmodel = \""
+      << model << "\"\n"
       << flow_keys << "[run]\nmode = \"steady\"\nsteps = 6000\n";
     return s.str();
 }
@@ -51,8 +62,12 @@ inline SectionRun section_run(const std::string& name, const std::string& case_t
                                          std::to_string(status) + " in " + d.string());
         });
     const nlohmann::json s = read_json_file(dir / "run" / "summary.json");
-    return {s.at("cl").get<double>(), s.at("cd").get<double>(), s.at("iterations").get<long>(),
-            s.at("converged").get<bool>()};
+    return {s.at("cl").get<double>(),
+            s.at("cd").get<double>(),
+            s.at("iterations").get<long>(),
+            s.at("converged").get<bool>(),
+            number_or_nan(s, "transition_upper"),
+            number_or_nan(s, "transition_lower")};
 }
 
 }  // namespace veer::test
