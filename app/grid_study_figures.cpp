@@ -33,8 +33,14 @@ nlohmann::json or_null(const std::optional<double>& v) {
     return v ? nlohmann::json(*v) : nlohmann::json(nullptr);
 }
 
+/// Whether the values showed an order at all (not for alternating or unchanged values).
+bool has_order(const GridConvergence& g) {
+    return g.verdict == ConvergenceVerdict::monotone ||
+           g.verdict == ConvergenceVerdict::order_out_of_range;
+}
+
 nlohmann::json convergence_json(const GridConvergence& g) {
-    return {{"observed_order", g.order},
+    return {{"observed_order", has_order(g) ? nlohmann::json(g.order) : nlohmann::json(nullptr)},
             {"order_used", g.order_used},
             {"safety_factor", g.safety_factor},
             {"extrapolated",
@@ -152,7 +158,7 @@ void print_grid_study_table(const GridStudyResult& r) {
         const GridConvergence* g = f.convergence ? &*f.convergence : nullptr;
         fmt::print("  {:<24} {:>10} {:>10} {:>10} {:>7} {:>11} {:>9}", f.label,
                    value_text(f.values[0]), value_text(f.values[1]), value_text(f.values[2]),
-                   g ? fmt::format("{:.2f}", g->order) : "-",
+                   g && has_order(*g) ? fmt::format("{:.2f}", g->order) : "-",
                    g && g->extrapolated_valid ? fmt::format("{:.5f}", g->extrapolated) : "-",
                    g ? fmt::format("{:.2f}%", 100 * g->gci_fine) : "-");
         if (r.far_boundary) {

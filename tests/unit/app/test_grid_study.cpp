@@ -119,6 +119,11 @@ TEST(GridStudyCommand, SecondCallReusesFinishedRunsAndRestartsFromACheckpoint) {
         EXPECT_TRUE(first["figures"][k].contains("observed_order")) << k;
     }
     EXPECT_TRUE(test::is_png(o.out_dir / "pictures" / "grid_study_cl.png"));
+    // Its report page: the grid-convergence section under the caution.
+    ASSERT_EQ(run_report_command({o.out_dir}), 0);
+    const std::string page = test::read_text(o.out_dir / "report.html");
+    EXPECT_NE(page.find("Grid convergence of each figure"), std::string::npos);
+    EXPECT_NE(page.find("not a substitute for testing"), std::string::npos);
     // Made-up lifts no solver gives: a second call that re-ran a finished grid would overwrite
     // them.
     const double h1 = first["grids"][0]["spacing"], h2 = first["grids"][1]["spacing"];
