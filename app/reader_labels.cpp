@@ -83,6 +83,10 @@ std::string circulation_label(double placed_distance, bool circle) {
     return fmt::format("circulation at {:.2f} {}", placed_distance, length_words(circle));
 }
 
+std::string outermost_label(double placed_distance, bool circle) {
+    return fmt::format("outermost contour at {:.1f} {}", placed_distance, length_words(circle));
+}
+
 std::string downward_flux_words(double half_height_chords) {
     return fmt::format(
         "downward momentum flux (per unit span, in rho U^2 c; positive when the flow is turned "
