@@ -76,6 +76,30 @@ CLI::App* add_sweep_subcommand(CLI::App& app, SweepOptions& o) {
     return sweep;
 }
 
+CLI::App* add_grid_study_subcommand(CLI::App& app, GridStudyOptions& o) {
+    CLI::App* study = app.add_subcommand(
+        "grid-study",
+        "run a case on three refined grids: observed order, extrapolated value and grid "
+        "convergence index (GCI) of each figure");
+    add_case_options(*study, o.input);
+    study->add_option("-o,--output", o.out_dir, "study folder (one run folder per grid)")
+        ->required();
+    study
+        ->add_option("--ratio", o.ratio,
+                     "refinement ratio of every grid dimension and the first cell (1.3 to 2; "
+                     "default sqrt 2)")
+        ->check(CLI::PositiveNumber);
+    study->add_option("--case-grid", o.case_grid,
+                      "the case's own grid is the finest (default) or the middle of the three");
+    study->add_flag("--far-boundary", o.far_boundary,
+                    "also run the finest grid with the far field twice as far");
+    study->add_flag("--force", o.force, "write into folders that hold another study");
+    study->add_flag("-q,--quiet", o.quiet, "no live progress line");
+    study->footer("e.g. veer grid-study CASE -o DIR --far-boundary\n\n" +
+                  std::string(reader_caution()) + ".");
+    return study;
+}
+
 }  // namespace
 
 int run_cli(int argc, char** argv) {
@@ -111,6 +135,8 @@ int run_cli(int argc, char** argv) {
 
     SweepOptions sweep_opts;
     CLI::App* sweep = add_sweep_subcommand(app, sweep_opts);
+    GridStudyOptions study_opts;
+    CLI::App* study = add_grid_study_subcommand(app, study_opts);
     ReportOptions report_opts;
     CLI::App* report = app.add_subcommand("report", "write DIR/report.html with pictures");
     report->add_option("dir", report_opts.dir, "a run folder or a sweep folder")
@@ -126,6 +152,7 @@ int run_cli(int argc, char** argv) {
         if (*check) return run_check_command(check_opts);
         if (*mesh) return run_mesh_command(mesh_opts);
         if (*sweep) return run_sweep_command(sweep_opts);
+        if (*study) return run_grid_study_command(study_opts);
         if (*report) return run_report_command(report_opts);
         if (*run) {
             if (run_opts.input.case_file.empty() && run_opts.restart.empty())

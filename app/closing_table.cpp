@@ -40,6 +40,10 @@ void print_routes(const CaseSpec& spec, const RunAnalysis& a, bool unsteady) {
         fmt::print("  {:<34} {:>10.5f} {:>10} {:>+13.5f}\n",
                    circulation_label(r.contour.distance, circle), r.cl_circulation, "",
                    r.cl_circulation_difference);
+    const RouteComparison& o = a.outermost;  // the far-boundary force check
+    fmt::print("  {:<34} {:>10.5f} {:>10.5f} {:>+13.5f}\n",
+               outermost_label(o.contour.distance, circle), o.cl_momentum, o.cd_momentum,
+               o.cl_momentum_difference);
     if (!a.routes.empty()) fmt::print("  {}\n", circulation_note);
     if (unsteady) {
         fmt::print(

@@ -42,6 +42,18 @@ struct SweepOptions {
     double stability_time = 6;  ///< disturbed time-accurate check of separated points; 0: none
 };
 
+/// `veer grid-study`: a case on three refined grids, the grid convergence of its figures
+/// (app/grid_study_*.hpp), optionally the far-boundary sensitivity.
+struct GridStudyOptions {
+    CaseOptions input;
+    std::filesystem::path out_dir;
+    double ratio = 1.41421356237;  ///< refinement ratio, each dimension (sqrt 2: half the cells)
+    std::string case_grid = "finest";  ///< which grid the case's own is: finest or middle
+    bool far_boundary = false;         ///< also the finest grid with the far field twice as far
+    bool force = false;
+    bool quiet = false;
+};
+
 /// `veer report`: DIR/report.html with pictures, for a run folder or a sweep folder.
 struct ReportOptions {
     std::filesystem::path dir;
@@ -51,6 +63,7 @@ int run_mesh_command(const MeshOptions& options);
 int run_check_command(const CaseOptions& options);
 int run_run_command(const RunOptions& options);
 int run_sweep_command(const SweepOptions& options);
+int run_grid_study_command(const GridStudyOptions& options);
 int run_report_command(const ReportOptions& options);
 
 }  // namespace veer

@@ -9,7 +9,7 @@ namespace veer {
 namespace {
 
 /// summary.json keys (a run's and a sweep's) and what a reader is shown for them.
-constexpr std::array<std::pair<std::string_view, FigureLabel>, 41> labels = {{
+constexpr std::array<std::pair<std::string_view, FigureLabel>, 45> labels = {{
     {"section", {"section", ""}},
     {"reynolds", {"Reynolds number (on the chord)", ""}},
     {"alpha", {"angle of attack", "deg"}},
@@ -26,6 +26,10 @@ constexpr std::array<std::pair<std::string_view, FigureLabel>, 41> labels = {{
     {"cd_friction", {"Cd, friction part", ""}},
     {"cm", {"Cm, about the quarter chord, nose-up positive", ""}},
     {"max_lift_disagreement", {"largest surface/control-volume lift disagreement", "ΔCl"}},
+    {"outermost_contour_distance", {"far-boundary check: outermost contour at", "chords"}},
+    {"cl_momentum_outermost", {"Cl, control volume on the outermost contour", ""}},
+    {"cd_momentum_outermost", {"Cd, control volume on the outermost contour", ""}},
+    {"outermost_lift_difference", {"outermost-contour Cl - surface Cl", "ΔCl"}},
     {"separation_upper", {"upper surface: separation", "x/c"}},
     {"reattachment_upper", {"upper surface: reattachment", "x/c"}},
     {"separation_lower", {"lower surface: separation", "x/c"}},
@@ -77,6 +81,10 @@ std::string control_volume_label(double placed_distance, bool circle) {
 
 std::string circulation_label(double placed_distance, bool circle) {
     return fmt::format("circulation at {:.2f} {}", placed_distance, length_words(circle));
+}
+
+std::string outermost_label(double placed_distance, bool circle) {
+    return fmt::format("outermost contour at {:.1f} {}", placed_distance, length_words(circle));
 }
 
 std::string downward_flux_words(double half_height_chords) {

@@ -26,6 +26,8 @@ const char* length_words(bool circle);
 std::string control_volume_label(double placed_distance, bool circle);
 /// "circulation at 0.53 chords", likewise.
 std::string circulation_label(double placed_distance, bool circle);
+/// "outermost contour at 29.6 chords": the far-boundary force check's row.
+std::string outermost_label(double placed_distance, bool circle);
 
 /// The header of a route's difference from the surface lift (not a slope).
 inline constexpr const char* difference_header = "Cl - surface";

@@ -8,6 +8,7 @@
 #include "app/commands.hpp"
 #include "app/polar_table.hpp"
 #include "app/reader_labels.hpp"
+#include "app/report_grid_study.hpp"
 #include "app/report_html.hpp"
 #include "app/report_tables.hpp"
 #include "app/sweep_plan.hpp"
@@ -113,11 +114,15 @@ int run_report_command(const ReportOptions& o) {
     ReportPage page;
     if (const std::optional<SweepPlan> plan = read_sweep_plan(dir))
         page = sweep_page(dir, *plan);
+    else if (is_grid_study_folder(dir))
+        page = grid_study_page(dir);
     else if (fs::exists(dir / "summary.json", ec))
         page = run_page(dir);
     else
-        throw InputError(dir.string() +
-                         ": neither a sweep folder (sweep.json) nor a run folder (summary.json)");
+        throw InputError(
+            dir.string() +
+            ": neither a sweep folder (sweep.json), a grid-study folder (grid_study.json) nor a "
+            "run folder (summary.json)");
     write_text_atomically(dir / "report.html", render_report_html(page));
     int pictures = 0;
     for (const ReportSection& s : page.sections) pictures += static_cast<int>(s.pictures.size());

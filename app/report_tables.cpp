@@ -116,9 +116,10 @@ ReportTable run_results_table(const nlohmann::json& s) {
     add_route_rows(t, s, "cl_circulation", "Cl", true);
     add_labelled_rows(
         t, s,
-        {"max_lift_disagreement", "stagnation_x", "separation_upper", "reattachment_upper",
-         "separation_lower", "reattachment_lower", "base_cp", "separation_angle_upper_deg",
-         "separation_angle_lower_deg", "recirculation_length"});
+        {"max_lift_disagreement", "outermost_contour_distance", "cl_momentum_outermost",
+         "cd_momentum_outermost", "outermost_lift_difference", "stagnation_x", "separation_upper",
+         "reattachment_upper", "separation_lower", "reattachment_lower", "base_cp",
+         "separation_angle_upper_deg", "separation_angle_lower_deg", "recirculation_length"});
     if (s.contains("time_average") && s["time_average"].is_object()) {
         const nlohmann::json& a = s["time_average"];
         const std::string over =

@@ -2,6 +2,7 @@
 
 #include "mesh/circle.hpp"
 #include "postprocess/grid_contour.hpp"
+#include "postprocess/outermost_contour.hpp"
 #include "postprocess/recirculation.hpp"
 #include "postprocess/wall_faces.hpp"
 
@@ -64,6 +65,7 @@ RunAnalysis analyse_flow(const StructuredGrid& grid, const GridMetrics& metrics,
     a.circulation = contour_circulation(grid, metrics, fields, contours);
     a.routes = compare_routes(a.forces, a.momentum, a.circulation);
     a.max_lift_disagreement = largest_lift_disagreement(a.routes);
+    a.outermost = outermost_route(grid, metrics, fields, conditions, a.forces);
     WakeProfileOptions wake;
     wake.stations = places.wake_stations;
     a.wake = wake_profiles(grid, metrics, fields, conditions, wake);

@@ -60,8 +60,10 @@ struct RunAnalysis {
     std::vector<ContourCirculation> circulation;  ///< the same contours
     std::vector<RouteComparison> routes;          ///< both routes against the surface route
     double max_lift_disagreement = 0.0;           ///< largest |Cl control volume - Cl surface|
-    std::vector<WakeProfile> wake;                ///< one per wake station
-    std::optional<CircleFigures> circle;          ///< set for the circle
+    /// The far-boundary force check: both routes on the largest contour (outermost_contour.hpp).
+    RouteComparison outermost;
+    std::vector<WakeProfile> wake;        ///< one per wake station
+    std::optional<CircleFigures> circle;  ///< set for the circle
 };
 
 /// Analyses `fields` on a C-grid (or the circle's O-grid). Throws InputError for a contour or wake
