@@ -6,6 +6,7 @@
 /// shared by the tests that read it.
 #include <filesystem>
 #include <fstream>
+#include <optional>
 #include <sstream>
 #include <stdexcept>
 #include <string>
@@ -21,6 +22,8 @@ struct SectionRun {
     double cl = 0.0, cd = 0.0;
     long iterations = 0;
     bool converged = false;
+    std::optional<double> transition_upper, transition_lower;  ///< x/c; none: laminar to the TE
+    std::filesystem::path run_dir;                             ///< the run folder (surface.csv)
 };
 
 /// The case text of one point; `flow_keys` are further [flow] lines (model options).
@@ -51,8 +54,16 @@ inline SectionRun section_run(const std::string& name, const std::string& case_t
                                          std::to_string(status) + " in " + d.string());
         });
     const nlohmann::json s = read_json_file(dir / "run" / "summary.json");
-    return {s.at("cl").get<double>(), s.at("cd").get<double>(), s.at("iterations").get<long>(),
-            s.at("converged").get<bool>()};
+    const auto x_or_none = [&](const char* key) {
+        return s.at(key).is_null() ? std::optional<double>() : s.at(key).get<double>();
+    };
+    return {s.at("cl").get<double>(),
+            s.at("cd").get<double>(),
+            s.at("iterations").get<long>(),
+            s.at("converged").get<bool>(),
+            x_or_none("transition_upper"),
+            x_or_none("transition_lower"),
+            dir / "run"};
 }
 
 }  // namespace veer::test
