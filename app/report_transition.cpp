@@ -78,8 +78,7 @@ void mark_transition_on_cf(Chart& chart, const fs::path& summary) {
     chart.title += " (laminar dashed, turbulent solid)";
 }
 
-void draw_transition_positions(const std::vector<PointRecord>& points, const PolarFigures& f,
-                               const fs::path& file) {
+Chart transition_positions_chart(const std::vector<PointRecord>& points, const PolarFigures& f) {
     Chart c;
     c.title = "Transition and laminar bubbles against angle of attack";
     c.x_label = "alpha (deg)";
@@ -105,7 +104,12 @@ void draw_transition_positions(const std::vector<PointRecord>& points, const Pol
                            fmt::format("separation onset {:g}°", *f.alpha_separation_onset)});
     if (f.alpha_cl_max)
         c.marks.push_back({*f.alpha_cl_max, fmt::format("Cl max {:g}°", *f.alpha_cl_max)});
-    write_chart(c, file);
+    return c;
+}
+
+void draw_transition_positions(const std::vector<PointRecord>& points, const PolarFigures& f,
+                               const fs::path& file) {
+    write_chart(transition_positions_chart(points, f), file);
 }
 
 }  // namespace veer

@@ -19,8 +19,11 @@ namespace veer {
 void mark_transition_on_cf(Chart& chart, const std::filesystem::path& summary);
 
 /// Transition x/c of each surface and the upper surface's laminar bubble against alpha, with the
-/// polar's separation-onset and Cl max angles marked. Throws InputError when no point has a
-/// transition position (nothing to draw).
+/// polar's separation-onset and Cl max angles marked, each series in a colour of its own. Throws
+/// InputError when no point has a transition position (nothing to draw).
+Chart transition_positions_chart(const std::vector<PointRecord>& points, const PolarFigures& f);
+
+/// That chart, written to `file`.
 void draw_transition_positions(const std::vector<PointRecord>& points, const PolarFigures& f,
                                const std::filesystem::path& file);
 

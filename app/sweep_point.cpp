@@ -19,6 +19,7 @@
 #include "mesh/errors.hpp"
 #include "postprocess/separation.hpp"
 #include "postprocess/time_average.hpp"
+#include "postprocess/transition_locator.hpp"
 
 namespace veer {
 namespace {
@@ -48,8 +49,8 @@ void add_separation(PointRecord& r, const RunAnalysis& a) {
         if (g.kind == SeparationKind::turbulent_separation && !r.turbulent_separation_upper)
             r.turbulent_separation_upper = g.start.x;
     }
-    if (a.transition.upper) r.transition_upper = a.transition.upper->x;
-    if (a.transition.lower) r.transition_lower = a.transition.lower->x;
+    if (a.transition.upper) r.transition_upper = reported_transition_x(*a.transition.upper);
+    if (a.transition.lower) r.transition_lower = reported_transition_x(*a.transition.lower);
 }
 
 /// Control-volume lift on the largest contour.

@@ -22,8 +22,14 @@ nlohmann::json first_start(const std::vector<SeparatedRegion>& regions, Separati
     return r ? nlohmann::json(r->start.x) : nlohmann::json(nullptr);
 }
 
-std::string surface_transition(const std::optional<SurfaceLocation>& t) {
-    return t ? fmt::format("x/c {:.3f}", t->x) : std::string("laminar to the trailing edge");
+nlohmann::json transition_or_null(const std::optional<SurfaceLocation>& t) {
+    return t ? nlohmann::json(reported_transition_x(*t)) : nlohmann::json(nullptr);
+}
+
+std::string surface_transition(const std::optional<SurfaceLocation>& t, bool from_leading_edge) {
+    if (!t) return "laminar to the trailing edge";
+    if (from_leading_edge) return "turbulent from the leading edge";
+    return fmt::format("x/c {:.3f}", reported_transition_x(*t));
 }
 
 }  // namespace
@@ -38,8 +44,10 @@ const SeparatedRegion* first_of_kind(const std::vector<SeparatedRegion>& regions
 nlohmann::json transition_summary(const RunAnalysis& a) {
     const TransitionCriterion criterion;
     return {
-        {"transition_upper", x_or_null(a.transition.upper)},
-        {"transition_lower", x_or_null(a.transition.lower)},
+        {"transition_upper", transition_or_null(a.transition.upper)},
+        {"transition_lower", transition_or_null(a.transition.lower)},
+        {"turbulent_from_leading_edge_upper", a.transition.upper_from_leading_edge},
+        {"turbulent_from_leading_edge_lower", a.transition.lower_from_leading_edge},
         {"turbulence_index_threshold", criterion.threshold},
         {"turbulence_index_hold", criterion.hold_arc},
         {"laminar_bubbles_upper", laminar_bubbles(a.regions_upper)},
@@ -57,9 +65,11 @@ nlohmann::json transition_summary(const RunAnalysis& a) {
 
 std::string transition_line(const RunAnalysis& a) {
     if (!a.has_turbulence_index) return "";
-    return fmt::format("transition (turbulence index through {:g}): upper {}, lower {}",
-                       TransitionCriterion{}.threshold, surface_transition(a.transition.upper),
-                       surface_transition(a.transition.lower));
+    return fmt::format(
+        "transition (turbulence index through {:g}): upper {}, lower {}",
+        TransitionCriterion{}.threshold,
+        surface_transition(a.transition.upper, a.transition.upper_from_leading_edge),
+        surface_transition(a.transition.lower, a.transition.lower_from_leading_edge));
 }
 
 std::string regions_text(const std::vector<SeparatedRegion>& regions) {

@@ -11,10 +11,11 @@
 namespace veer {
 
 /// The summary.json keys: transition_upper, transition_lower (x/c, null when the surface stays
-/// laminar or the model has no nu~), turbulence_index_threshold and turbulence_index_hold (the
-/// criterion), and per surface laminar_bubbles_* ([separation, transition or null,
-/// reattachment] x/c), laminar_separation_* and turbulent_separation_* (x/c of the first, or
-/// null).
+/// laminar or the model has no nu~; 0 at most), turbulent_from_leading_edge_upper and _lower
+/// (true when the surface has no laminar part), turbulence_index_threshold and
+/// turbulence_index_hold (the criterion), and per surface laminar_bubbles_* ([separation,
+/// transition or null, reattachment] x/c), laminar_separation_* and turbulent_separation_* (x/c of
+/// the first, or null).
 nlohmann::json transition_summary(const RunAnalysis& a);
 
 /// "transition (turbulence index through 0.5): upper x/c 0.312, lower laminar to the trailing

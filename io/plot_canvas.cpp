@@ -21,6 +21,7 @@ Colour series_colour(int index) {
         {0.60, 0.15, 0.45},  // plum
         {0.45, 0.45, 0.45},  // grey
         {0.80, 0.65, 0.05},  // ochre
+        {0.05, 0.58, 0.62},  // teal (the bubbles' ends: index 6 no longer wraps to blue)
     };
     return palette[static_cast<unsigned>(index) % (sizeof(palette) / sizeof(palette[0]))];
 }

@@ -1,5 +1,6 @@
 #include "postprocess/transition_locator.hpp"
 
+#include <algorithm>
 #include <cmath>
 #include <limits>
 
@@ -62,16 +63,20 @@ SurfaceLocation crossing(const SurfacePoint& a, double ia, const SurfacePoint& b
 
 }  // namespace
 
-std::optional<SurfaceLocation> find_surface_transition(const std::vector<SurfacePoint>& side,
-                                                       const WallTurbulenceIndex& index,
-                                                       double start_arc,
-                                                       const TransitionCriterion& criterion) {
+namespace {
+
+/// find_surface_transition, also telling whether the surface is turbulent from its first point.
+std::optional<SurfaceLocation> locate(const std::vector<SurfacePoint>& side,
+                                      const WallTurbulenceIndex& index, double start_arc,
+                                      const TransitionCriterion& criterion, bool& from_first) {
+    from_first = false;
     const SurfacePoint* previous = nullptr;
     for (std::size_t k = 0; k < side.size(); ++k) {
         const SurfacePoint& p = side[k];
         if (p.arc < start_arc) continue;
         if (index.at(p.i) >= criterion.threshold && holds_from(side, index, k, criterion)) {
-            if (previous == nullptr) return location_of(p);  // turbulent from the first point
+            from_first = previous == nullptr;
+            if (from_first) return location_of(p);
             return crossing(*previous, index.at(previous->i), p, index.at(p.i),
                             criterion.threshold);
         }
@@ -80,17 +85,29 @@ std::optional<SurfaceLocation> find_surface_transition(const std::vector<Surface
     return std::nullopt;
 }
 
+}  // namespace
+
+std::optional<SurfaceLocation> find_surface_transition(const std::vector<SurfacePoint>& side,
+                                                       const WallTurbulenceIndex& index,
+                                                       double start_arc,
+                                                       const TransitionCriterion& criterion) {
+    bool from_first = false;
+    return locate(side, index, start_arc, criterion, from_first);
+}
+
 TransitionReport find_transition(const SurfaceDistribution& distribution,
                                  const WallTurbulenceIndex& index,
                                  const SurfaceLocation& stagnation,
                                  const TransitionCriterion& criterion) {
     const bool on_upper = stagnation.side == SurfaceSide::upper;
     TransitionReport r;
-    r.upper = find_surface_transition(distribution.upper, index, on_upper ? stagnation.arc : 0.0,
-                                      criterion);
-    r.lower = find_surface_transition(distribution.lower, index, on_upper ? 0.0 : stagnation.arc,
-                                      criterion);
+    r.upper = locate(distribution.upper, index, on_upper ? stagnation.arc : 0.0, criterion,
+                     r.upper_from_leading_edge);
+    r.lower = locate(distribution.lower, index, on_upper ? 0.0 : stagnation.arc, criterion,
+                     r.lower_from_leading_edge);
     return r;
 }
+
+double reported_transition_x(const SurfaceLocation& at) { return std::max(0.0, at.x); }
 
 }  // namespace veer

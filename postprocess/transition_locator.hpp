@@ -62,11 +62,20 @@ std::optional<SurfaceLocation> find_surface_transition(const std::vector<Surface
 struct TransitionReport {
     std::optional<SurfaceLocation> upper;
     std::optional<SurfaceLocation> lower;
+    /// Turbulent from the first point walked (the leading edge, or the stagnation point on its
+    /// surface): no laminar part at all, as fully turbulent Spalart–Allmaras gives. Outputs word
+    /// it "turbulent from the leading edge" rather than give the first face's x/c.
+    bool upper_from_leading_edge = false, lower_from_leading_edge = false;
 };
 
 TransitionReport find_transition(const SurfaceDistribution& distribution,
                                  const WallTurbulenceIndex& index,
                                  const SurfaceLocation& stagnation,
                                  const TransitionCriterion& criterion = {});
+
+/// The x/c a reader is given for a transition position: never ahead of the leading edge. On a
+/// cambered section at high alpha the first wall face walked can lie a little ahead of x = 0
+/// (x/c -0.0002 measured with fully turbulent Spalart–Allmaras on NACA 4412): that is x/c 0.
+double reported_transition_x(const SurfaceLocation& at);
 
 }  // namespace veer

@@ -7,7 +7,8 @@
 /// Measured 18:25-18:45 UTC with `veer run` on the same case texts (Cd, Sheldahl & Klimas, error):
 ///   Re 1e6:   alpha 0 0.00517 / 0.0065 -20.4 %; 2 0.00553 / 0.0068 -18.7 %;
 ///             4 0.00681 / 0.0078 -12.7 %; 6 0.00928 / 0.0101 -8.1 % (not converged, 6000 steps);
-///   Re 3.6e5: alpha 0 0.00702 / 0.0079 -11.1 %; 2 0.00779 / 0.0084 -7.3 %; 4 0.00931 / 0.0098 -5.0 %.
+///   Re 3.6e5: alpha 0 0.00702 / 0.0079 -11.1 %; 2 0.00779 / 0.0084 -7.3 %; 4 0.00931 / 0.0098 -5.0
+///   %.
 /// So DragAtRe1e6WithinFifteenPercentOfSheldahlKlimas fails at alpha 0 and 2 (and on convergence
 /// at 6); its band is the and is left as it is. The cause is the model's late transition
 /// on a Blasius-like layer, not a slip in veer (solver/README.md, "Transition models";
@@ -61,7 +62,8 @@ void expect_drag_band(const std::string& column, double reynolds, const std::vec
                   << ", SA-AFT2017b N_crit 9: " << r.iterations << " steps, Cl " << r.cl << ", Cd "
                   << r.cd << " (Sheldahl & Klimas 1981: " << published << ", "
                   << 100.0 * (r.cd / published - 1.0) << " %), transition x/c upper "
-                  << r.transition_upper << ", lower " << r.transition_lower << "\n";
+                  << r.transition_upper.value_or(std::nan("")) << ", lower "
+                  << r.transition_lower.value_or(std::nan("")) << "\n";
         EXPECT_TRUE(r.converged) << alpha;
         EXPECT_NEAR(r.cd, published, band * published) << "Re " << reynolds << " alpha " << alpha;
     }
@@ -104,8 +106,8 @@ TEST(TransitionNaca0012, DragGridConvergedWithinThreePercentAtRe1e6) {
         h[k] = 1.0 / std::sqrt(static_cast<double>(ni) * l.normal);
         cd[k] = r.cd;
         std::cout << "| " << l.around << " x " << l.normal << " | " << h[k] << " | " << r.iterations
-                  << " | " << r.cd << " | " << r.transition_upper << ", " << r.transition_lower
-                  << " |\n";
+                  << " | " << r.cd << " | " << r.transition_upper.value_or(std::nan("")) << ", "
+                  << r.transition_lower.value_or(std::nan("")) << " |\n";
     }
     const GridConvergence g = grid_convergence(h, cd);
     std::cout << "Cd: " << verdict_text(g) << ", extrapolated " << g.extrapolated << ", GCI_fine "

@@ -7,6 +7,7 @@
 #include <cmath>
 #include <filesystem>
 #include <fstream>
+#include <optional>
 #include <sstream>
 #include <stdexcept>
 #include <string>
@@ -22,8 +23,8 @@ struct SectionRun {
     double cl = 0.0, cd = 0.0;
     long iterations = 0;
     bool converged = false;
-    /// Transition x/c on each surface; NaN where summary.json gives none.
-    double transition_upper = std::nan(""), transition_lower = std::nan("");
+    std::optional<double> transition_upper, transition_lower;  ///< x/c; none: laminar to the TE
+    std::filesystem::path run_dir;                             ///< the run folder (surface.csv)
 };
 
 /// `key` of summary.json as a number, NaN where it is absent or not a number.
@@ -62,12 +63,16 @@ inline SectionRun section_run(const std::string& name, const std::string& case_t
                                          std::to_string(status) + " in " + d.string());
         });
     const nlohmann::json s = read_json_file(dir / "run" / "summary.json");
+    const auto x_or_none = [&](const char* key) {
+        return s.at(key).is_null() ? std::optional<double>() : s.at(key).get<double>();
+    };
     return {s.at("cl").get<double>(),
             s.at("cd").get<double>(),
             s.at("iterations").get<long>(),
             s.at("converged").get<bool>(),
-            number_or_nan(s, "transition_upper"),
-            number_or_nan(s, "transition_lower")};
+            x_or_none("transition_upper"),
+            x_or_none("transition_lower"),
+            dir / "run"};
 }
 
 }  // namespace veer::test

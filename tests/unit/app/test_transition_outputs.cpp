@@ -17,6 +17,7 @@
 #include "app_test_support.hpp"
 #include "io/case_file.hpp"
 #include "io/json_writer.hpp"
+#include "io/plot_canvas.hpp"
 
 namespace veer {
 namespace {
@@ -74,6 +75,26 @@ TEST(TransitionFigures, ClosingTableStatesTransitionAndTheBubble) {
     EXPECT_TRUE(s.at("transition_lower").is_null());
     ASSERT_EQ(s.at("laminar_bubbles_upper").size(), 1u);
     EXPECT_DOUBLE_EQ(s.at("laminar_bubbles_upper")[0][1].get<double>(), 0.35);
+}
+
+TEST(TransitionFigures, TurbulentFromTheLeadingEdgeIsSaidSoNotANegativePosition) {
+    // Fully turbulent SA on a cambered section at high alpha: the first upper face walked lies a
+    // little ahead of x = 0 (x/c -0.0002 was printed before).
+    RunAnalysis a;
+    a.has_turbulence_index = true;
+    a.transition.upper = SurfaceLocation{SurfaceSide::upper, 0.0003, -0.0002, 0.002};
+    a.transition.upper_from_leading_edge = true;
+    a.transition.lower = SurfaceLocation{SurfaceSide::lower, 0.61, 0.6, -0.03};
+    const std::string line = transition_line(a);
+    EXPECT_NE(line.find("upper turbulent from the leading edge, lower x/c 0.600"),
+              std::string::npos)
+        << line;
+    EXPECT_EQ(line.find("-0.000"), std::string::npos) << line;
+    const nlohmann::json s = transition_summary(a);
+    EXPECT_EQ(s.at("transition_upper").get<double>(), 0.0);
+    EXPECT_TRUE(s.at("turbulent_from_leading_edge_upper").get<bool>());
+    EXPECT_FALSE(s.at("turbulent_from_leading_edge_lower").get<bool>());
+    EXPECT_DOUBLE_EQ(s.at("transition_lower").get<double>(), 0.6);
 }
 
 TEST(TransitionFigures, LaminarRunHasNoTransitionLine) {
@@ -145,6 +166,53 @@ TEST(TransitionPictures, CfIsSplitAtTransitionWithTheBubbleDrawn) {
     EXPECT_EQ(c.series[3].x.size(), 11u);
     ASSERT_EQ(c.marks.size(), 1u);
     EXPECT_EQ(c.marks[0].label, "transition upper 0.35");
+}
+
+/// The colour a series is drawn in (io/plot_chart.cpp's rule).
+Colour drawn_colour(const Chart& c, std::size_t k) {
+    return series_colour(c.series[k].colour >= 0 ? c.series[k].colour : static_cast<int>(k));
+}
+
+bool same_colour(const Colour& a, const Colour& b) {
+    return a.r == b.r && a.g == b.g && a.b == b.b;
+}
+
+TEST(TransitionPictures, BubblesHaveColoursOfTheirOwnOnTheCfPicture) {
+    test::AppScratch scratch;
+    test::write_text(scratch / "summary.json",
+                     R"({"model": "sa-aft", "transition_upper": 0.35, "transition_lower": 0.7,
+                         "laminar_bubbles_upper": [[0.3, 0.35, 0.4]],
+                         "laminar_bubbles_lower": [[0.6, 0.7, 0.75]]})");
+    Chart c;
+    c.series = {ramp("upper"), ramp("lower")};
+    c.series[0].colour = 0;  // as report_run_pictures.cpp draws them
+    c.series[1].colour = 1;
+    mark_transition_on_cf(c, scratch / "summary.json");
+    ASSERT_EQ(c.series.size(), 6u);
+    std::vector<std::size_t> bubbles, surfaces;
+    for (std::size_t k = 0; k < c.series.size(); ++k)
+        (c.series[k].label.starts_with("laminar bubble") ? bubbles : surfaces).push_back(k);
+    ASSERT_EQ(bubbles.size(), 2u);
+    EXPECT_FALSE(same_colour(drawn_colour(c, bubbles[0]), drawn_colour(c, bubbles[1])));
+    for (std::size_t b : bubbles)
+        for (std::size_t s : surfaces)
+            EXPECT_FALSE(same_colour(drawn_colour(c, b), drawn_colour(c, s)))
+                << c.series[b].label << " drawn like " << c.series[s].label;
+}
+
+TEST(TransitionPictures, EverySeriesOfTheSweepPictureHasItsOwnColour) {
+    std::vector<PointRecord> p(2);
+    p[0].alpha = 0.0, p[1].alpha = 4.0;
+    for (PointRecord& r : p) {
+        r.transition_upper = 0.5 - 0.05 * r.alpha, r.transition_lower = 0.7;
+        r.laminar_bubble_upper = 0.3, r.laminar_bubble_upper_end = 0.45;
+    }
+    const Chart c = transition_positions_chart(p, PolarFigures{});
+    ASSERT_EQ(c.series.size(), 4u);  // upper, lower, bubble start, bubble end
+    for (std::size_t a = 0; a < c.series.size(); ++a)
+        for (std::size_t b = a + 1; b < c.series.size(); ++b)
+            EXPECT_FALSE(same_colour(drawn_colour(c, a), drawn_colour(c, b)))
+                << c.series[a].label << " and " << c.series[b].label << " share a colour";
 }
 
 TEST(TransitionPictures, LaminarRunCfIsLeftAlone) {

@@ -136,6 +136,26 @@ TEST(TransitionLocator, TurbulentFromTheStartIsTheFirstPointAfterTheStagnationPo
     EXPECT_DOUBLE_EQ(t->arc, 0.3025);
 }
 
+TEST(TransitionLocator, ASurfaceWithNoLaminarPartIsTurbulentFromTheLeadingEdge) {
+    // Upper: turbulent from its first face, which lies a little ahead of x = 0 (a cambered nose);
+    // lower: a crossing at 0.5, not from the leading edge.
+    auto upper = synthetic_side(200, [](double) { return 1.0; });
+    auto lower = synthetic_side(200, [](double x) { return x < 0.5 ? 0.0 : 1.0; });
+    upper.points.front().x = -0.0002;
+    SurfaceDistribution d;
+    d.upper = upper.points;
+    d.lower = lower.points;
+    for (SurfacePoint& p : d.lower) p.i += 200, p.side = SurfaceSide::lower;
+    WallTurbulenceIndex index = upper.index;
+    index.values.insert(index.values.end(), lower.index.values.begin(), lower.index.values.end());
+    const TransitionReport r = find_transition(d, index, SurfaceLocation{SurfaceSide::upper, 0.0});
+    ASSERT_TRUE(r.upper && r.lower);
+    EXPECT_TRUE(r.upper_from_leading_edge);
+    EXPECT_FALSE(r.lower_from_leading_edge);
+    EXPECT_EQ(reported_transition_x(*r.upper), 0.0);  // never ahead of the leading edge
+    EXPECT_NEAR(reported_transition_x(*r.lower), 0.5, 1e-12);
+}
+
 TEST(TransitionLocator, ZeroShearFacesNeverCountAsTurbulent) {
     // NaN (zero wall shear) inside the hold after the rise at 0.5 moves the transition to after it.
     const auto s = synthetic_side(1000, [](double x) {
