@@ -9,7 +9,7 @@ namespace veer {
 namespace {
 
 /// summary.json keys (a run's and a sweep's) and what a reader is shown for them.
-constexpr std::array<std::pair<std::string_view, FigureLabel>, 41> labels = {{
+constexpr std::array<std::pair<std::string_view, FigureLabel>, 45> labels = {{
     {"section", {"section", ""}},
     {"reynolds", {"Reynolds number (on the chord)", ""}},
     {"alpha", {"angle of attack", "deg"}},
@@ -40,6 +40,10 @@ constexpr std::array<std::pair<std::string_view, FigureLabel>, 41> labels = {{
     {"cl_max", {"largest Cl in the sweep", ""}},
     {"alpha_cl_max", {"angle of the largest Cl", "deg"}},
     {"stall_in_range", {"lift falls after its largest value within the sweep", ""}},
+    {"stall_bracketed", {"largest Cl has a lower Cl on each side", ""}},
+    {"alpha_cl_max_uncertainty", {"angle of the largest Cl: ± (the wider gap beside it)", "deg"}},
+    {"cl_max_uncertainty", {"largest Cl: + (parabola through it and its neighbours)", ""}},
+    {"stall_search", {"stall search (points added past the requested angles)", ""}},
     {"alpha_separation_onset", {"separation onset (upper surface)", "deg"}},
     {"cd_min", {"least Cd", ""}},
     {"alpha_cd_min", {"angle of the least Cd", "deg"}},
