@@ -10,6 +10,7 @@
 #include "app/reader_labels.hpp"
 #include "app/report_html.hpp"
 #include "app/report_tables.hpp"
+#include "app/sweep_error_bars.hpp"
 #include "app/sweep_plan.hpp"
 #include "io/atomic_file.hpp"
 #include "io/json_writer.hpp"
@@ -38,7 +39,8 @@ void add_skipped(ReportSection& s, const PictureSet& set) {
 }
 
 ReportPage sweep_page(const fs::path& dir, const SweepPlan& plan) {
-    const GatheredPoints g = gather_point_records(dir, plan);
+    GatheredPoints g = gather_point_records(dir, plan);
+    if (plan.error_bars) attach_grid_errors(dir, *plan.error_bars, g.records);
     write_polar_files(dir, g.records, g.missing, plan.stall_search);
     std::vector<PointRecord> p = g.records;
     std::sort(p.begin(), p.end(), [](const auto& a, const auto& b) { return a.alpha < b.alpha; });

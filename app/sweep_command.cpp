@@ -22,6 +22,7 @@
 #include "app/sweep_angles.hpp"
 #include "app/sweep_block.hpp"
 #include "app/sweep_coarser_grids.hpp"
+#include "app/sweep_error_bars.hpp"
 #include "app/sweep_plan.hpp"
 #include "app/sweep_point.hpp"
 #include "app/sweep_ranks.hpp"
@@ -67,8 +68,9 @@ void say_cl_max(const std::vector<PointRecord>& records, const std::string& sear
                    search.empty() ? std::string() : " (stall search: " + search + ")");
 }
 
-int write_polar(const fs::path& dir, std::vector<PointRecord> records,
-                const std::vector<double>& angles, const std::string& stall_search) {
+int write_polar(const fs::path& dir, std::vector<PointRecord> records, const SweepPlan& plan) {
+    const std::vector<double> angles = all_angles(plan);
+    if (plan.error_bars) attach_grid_errors(dir, *plan.error_bars, records);
     std::vector<double> missing;
     for (double a : angles) {
         const bool found = std::any_of(records.begin(), records.end(), [&](const PointRecord& r) {
@@ -76,14 +78,14 @@ int write_polar(const fs::path& dir, std::vector<PointRecord> records,
         });
         if (!found) missing.push_back(a);
     }
-    write_polar_files(dir, records, missing, stall_search);
+    write_polar_files(dir, records, missing, plan.stall_search);
     int failed = 0;
     for (const PointRecord& r : records) failed += r.regime == "failed";
     fmt::print("polar of {} points written: {} and {}\n", records.size(),
                (dir / "polar.csv").string(), (dir / "summary.json").string());
     std::sort(records.begin(), records.end(),
               [](const auto& a, const auto& b) { return a.alpha < b.alpha; });
-    if (!records.empty()) say_cl_max(records, stall_search);
+    if (!records.empty()) say_cl_max(records, plan.stall_search);
     if (!missing.empty()) fmt::print("{} points have no result yet\n", missing.size());
     if (failed) fmt::print(stderr, "veer: {} points failed (see their sweep_point.json)\n", failed);
     return failed || !missing.empty() ? 1 : 0;
@@ -130,7 +132,7 @@ int run_sweep(const SweepOptions& o, const SweepRanks& ranks) {
                 records.push_back(*r);
         if (search) gather_stall_points(o, sweep, plan, records);
         write_sweep_plan(o.out_dir, plan);
-        return write_polar(o.out_dir, records, all_angles(plan), plan.stall_search);
+        return write_polar(o.out_dir, records, plan);
     }
     const std::vector<std::size_t> mine_points = points_to_run(o, angles.size(), ranks);
     MeshBuild mesh = build_mesh(base);
@@ -186,7 +188,7 @@ int run_sweep(const SweepOptions& o, const SweepRanks& ranks) {
     }
     if (!ranks.is_root()) return 0;
     write_sweep_plan(o.out_dir, plan);
-    return write_polar(o.out_dir, records, all_angles(plan), plan.stall_search);
+    return write_polar(o.out_dir, records, plan);
 }
 
 }  // namespace
