@@ -72,8 +72,10 @@ bool run_stall_search(const SweepOptions& o, const SweepCase& sweep, SweepPlan& 
         if (ranks.is_root()) {
             for (double a : angles) plan.added.push_back({a, why});
             write_sweep_plan(o.out_dir, plan);
-            fmt::print("{} (cap {} steps beyond the requested angles): {:g} deg\n", why,
-                       o.stall_steps, fmt::join(angles, ", "));
+            const bool beyond = why.rfind("stall search", 0) == 0;  // an extension, not a halving
+            fmt::print("{}{}: {:g} deg\n", why,
+                       beyond ? fmt::format(" (cap: {} steps)", o.stall_steps) : std::string(),
+                       fmt::join(angles, ", "));
         }
         const std::vector<std::size_t> mine = block_indices(angles.size(), ranks);
         std::optional<FlowFields> start;

@@ -38,6 +38,16 @@ void make_finished(const std::filesystem::path& sweep_dir, const PointRecord& r,
     write_json_file(record_path(dir), record_to_json(r));
 }
 
+/// A quiet sweep of the scratch folder's c.toml into its folder sw.
+SweepOptions quiet_sweep(const test::AppScratch& tmp, const std::string& alpha) {
+    SweepOptions o;
+    o.input.case_file = tmp / "c.toml";
+    o.alpha = alpha;
+    o.out_dir = tmp / "sw";
+    o.quiet = true;
+    return o;
+}
+
 TEST(SweepResume, FinishedPointIsFoundOnlyForTheSameCase) {
     test::AppScratch tmp;
     test::write_text(tmp / "c.toml", test::tiny_case_text());
@@ -59,11 +69,7 @@ TEST(SweepResume, SweepOfFinishedPointsRunsNothing) {
     test::AppScratch tmp;
     test::write_text(tmp / "c.toml", test::tiny_case_text());
     SweepCase sweep{read_case_source(tmp / "c.toml"), {}, 0, 0.0, false};
-    SweepOptions o;
-    o.input.case_file = tmp / "c.toml";
-    o.alpha = "0:8:4";
-    o.out_dir = tmp / "sw";
-    o.quiet = true;
+    SweepOptions o = quiet_sweep(tmp, "0:8:4");
     for (double a : {0.0, 4.0, 8.0})
         make_finished(o.out_dir, made_up_point(sweep, a), o.input.case_file);
     ASSERT_EQ(run_sweep_command(o), 0);
@@ -79,11 +85,7 @@ TEST(SweepResume, GatherWritesThePolarOfWhatIsThere) {
     test::AppScratch tmp;
     test::write_text(tmp / "c.toml", test::tiny_case_text());
     SweepCase sweep{read_case_source(tmp / "c.toml"), {}, 0, 0.0, false};
-    SweepOptions o;
-    o.input.case_file = tmp / "c.toml";
-    o.alpha = "0,2,4";
-    o.out_dir = tmp / "sw";
-    o.quiet = true;
+    SweepOptions o = quiet_sweep(tmp, "0,2,4");
     o.gather = true;
     make_finished(o.out_dir, made_up_point(sweep, 2.0), o.input.case_file);
     EXPECT_EQ(run_sweep_command(o), 1);  // two points are missing: not a whole polar
@@ -100,11 +102,7 @@ TEST(SweepResume, StallSearchAddsBracketingPointsToThePolar) {
     test::AppScratch tmp;
     test::write_text(tmp / "c.toml", test::tiny_case_text());
     SweepCase sweep{read_case_source(tmp / "c.toml"), {}, 0, 0.0, false};
-    SweepOptions o;
-    o.input.case_file = tmp / "c.toml";
-    o.alpha = "0:8:4";
-    o.out_dir = tmp / "sw";
-    o.quiet = true;
+    SweepOptions o = quiet_sweep(tmp, "0:8:4");
     o.stall_search = "on";  // the tiny case is at Re 1000, where "auto" leaves it off
     for (int k = 0; k <= 48; ++k) {
         const double a = 0.25 * k;
@@ -136,11 +134,7 @@ TEST(SweepResume, StallSearchOffKeepsTheRequestedAngles) {
     test::AppScratch tmp;
     test::write_text(tmp / "c.toml", test::tiny_case_text());
     SweepCase sweep{read_case_source(tmp / "c.toml"), {}, 0, 0.0, false};
-    SweepOptions o;
-    o.input.case_file = tmp / "c.toml";
-    o.alpha = "0:8:4";
-    o.out_dir = tmp / "sw";
-    o.quiet = true;
+    SweepOptions o = quiet_sweep(tmp, "0:8:4");
     o.stall_search = "off";
     for (double a : {0.0, 4.0, 8.0, 12.0})
         make_finished(o.out_dir, made_up_point(sweep, a), o.input.case_file);
