@@ -68,6 +68,23 @@ CLI::App* add_sweep_subcommand(CLI::App& app, SweepOptions& o) {
                      "length of the disturbed time-accurate check of converged separated points "
                      "(chords / free-stream speed; 0: no check)")
         ->check(CLI::NonNegativeNumber);
+    sweep
+        ->add_option("--stall-search", o.stall_search,
+                     "go on past the last angle until Cl falls, then halve the step around Cl max "
+                     "to 0.5 deg: on, off, auto (on from Re 1e4 up; default)")
+        ->check(CLI::IsMember({"on", "off", "auto"}));
+    sweep
+        ->add_option("--stall-steps", o.stall_steps,
+                     "cap of the stall search: steps beyond the requested angles (default 5)")
+        ->check(CLI::Range(1, 50));
+    sweep->add_flag("--error-bars", o.error_bars,
+                    "also run every angle on two coarser grids and give Cl and Cd a grid "
+                    "convergence index (error bars on the polar)");
+    sweep
+        ->add_option("--error-bar-ratio", o.error_bar_ratio,
+                     "refinement ratio between the three grids, at least 1.3 (default 1.414: "
+                     "each coarser grid has half the cells)")
+        ->check(CLI::Range(1.3, 4.0));
     sweep->add_flag("--force", o.force, "write into a folder that holds another study");
     sweep->add_flag("-q,--quiet", o.quiet, "no live progress line");
     sweep->footer(

@@ -40,6 +40,14 @@ struct SweepOptions {
     long steady_steps = 0;      ///< > 0: step cap of each steady attempt
     double unsteady_time = 0;   ///< > 0: end time of time-accurate points
     double stability_time = 6;  ///< disturbed time-accurate check of separated points; 0: none
+    /// Stall search after the requested angles (app/stall_search.hpp): "on", "off" or "auto"
+    /// (on from Reynolds number 1e4 up: below it a section's lift rises past 20 degrees).
+    std::string stall_search = "auto";
+    int stall_steps = 5;  ///< the search's cap: steps beyond the requested angles
+    /// Every angle also on the two coarser members of the case's grid family, for per-point
+    /// error bars of Cl and Cd (app/sweep_error_bars.hpp).
+    bool error_bars = false;
+    double error_bar_ratio = 1.4142135623730951;  ///< the family's ratio: sqrt 2 halves the cells
 };
 
 /// `veer grid-study`: a case on three refined grids, the grid convergence of its figures

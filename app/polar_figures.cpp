@@ -95,9 +95,13 @@ PolarFigures polar_figures(const std::vector<PointRecord>& points) {
                 f.max_lift_disagreement = d;
         }
     }
-    for (const PointRecord& r : p)
+    std::vector<PolarSample> samples;
+    for (const PointRecord& r : p) {
         if (f.alpha_cl_max && r.alpha > *f.alpha_cl_max && r.cl < *f.cl_max)
             f.stall_in_range = true;
+        samples.push_back({r.alpha, r.cl});
+    }
+    f.stall = stall_bracket(samples);
     return f;
 }
 

@@ -14,6 +14,7 @@
 #include <optional>
 #include <vector>
 
+#include "app/stall_search.hpp"
 #include "app/sweep_record.hpp"
 
 namespace veer {
@@ -30,6 +31,8 @@ struct PolarFigures {
     std::optional<double> alpha_zero_lift;
     std::optional<double> cl_max, alpha_cl_max;
     bool stall_in_range = false;  ///< cl falls again at a higher angle than alpha_cl_max
+    /// Cl max with the uncertainty its angle spacing leaves (app/stall_search.hpp).
+    std::optional<StallBracket> stall;
     std::optional<double> alpha_separation_onset;
     std::optional<double> cd_min, alpha_cd_min;
     std::optional<double> max_lift_disagreement;

@@ -13,8 +13,9 @@ namespace veer {
 const std::vector<const char*>& polar_columns();
 
 /// Writes DIR/polar.csv and DIR/summary.json (both through a temporary file). `missing` lists
-/// the angles of the sweep that have no result yet (they are named in the summary).
+/// the angles of the sweep that have no result yet (they are named in the summary);
+/// `stall_search` how the sweep's stall search ended (summary.json; null when empty).
 void write_polar_files(const std::filesystem::path& dir, std::vector<PointRecord> points,
-                       const std::vector<double>& missing);
+                       const std::vector<double>& missing, const std::string& stall_search = {});
 
 }  // namespace veer

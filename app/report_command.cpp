@@ -11,6 +11,7 @@
 #include "app/report_grid_study.hpp"
 #include "app/report_html.hpp"
 #include "app/report_tables.hpp"
+#include "app/sweep_error_bars.hpp"
 #include "app/sweep_plan.hpp"
 #include "io/atomic_file.hpp"
 #include "io/json_writer.hpp"
@@ -39,8 +40,9 @@ void add_skipped(ReportSection& s, const PictureSet& set) {
 }
 
 ReportPage sweep_page(const fs::path& dir, const SweepPlan& plan) {
-    const GatheredPoints g = gather_point_records(dir, plan);
-    write_polar_files(dir, g.records, g.missing);
+    GatheredPoints g = gather_point_records(dir, plan);
+    if (plan.error_bars) attach_grid_errors(dir, *plan.error_bars, g.records);
+    write_polar_files(dir, g.records, g.missing, plan.stall_search);
     std::vector<PointRecord> p = g.records;
     std::sort(p.begin(), p.end(), [](const auto& a, const auto& b) { return a.alpha < b.alpha; });
     const PolarFigures f = polar_figures(p);
@@ -60,7 +62,7 @@ ReportPage sweep_page(const fs::path& dir, const SweepPlan& plan) {
         "least squares over the linear range (from the lowest |alpha|, grown while every point "
         "stays within 2 % of the range's largest |Cl|). Separation onset: the first angle whose "
         "upper-surface flow leaves the wall ahead of 0.95 chord or shows a bubble there.",
-        p.size(), plan.angles.size()));
+        p.size(), all_angles(plan).size()));
     const PictureSet sp = draw_sweep_pictures(dir, p, f);
     polar.pictures = sp.pictures;
     add_skipped(polar, sp);

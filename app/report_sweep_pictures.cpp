@@ -23,13 +23,25 @@ std::vector<ChartMark> polar_marks(const PolarFigures& f) {
                          fmt::format("separation onset {:g}°", *f.alpha_separation_onset)});
     // Cl max is marked as the stall angle only when Cl falls again beyond it; otherwise the
     // largest Cl is only the end of the range swept.
+    // A bracketed maximum carries the ± its angle spacing leaves (app/stall_search.hpp).
+    const std::string spread = f.stall && f.stall->alpha_uncertainty
+                                   ? fmt::format(" ± {:g}°", *f.stall->alpha_uncertainty)
+                                   : std::string();
     if (f.alpha_cl_max)
         marks.push_back(
             {*f.alpha_cl_max,
              f.stall_in_range
-                 ? fmt::format("stall, Cl max {:g}°", *f.alpha_cl_max)
+                 ? fmt::format("stall, Cl max {:g}°{}", *f.alpha_cl_max, spread)
                  : fmt::format("largest Cl swept {:g}° (no stall in range)", *f.alpha_cl_max)});
     return marks;
+}
+
+/// The error band of a figure from the sweep's coarser grids (--error-bars); NaN: none.
+double grid_band(const PointRecord& r, double PointRecord::*figure) {
+    const auto& e = figure == &PointRecord::cl   ? r.cl_grid
+                    : figure == &PointRecord::cd ? r.cd_grid
+                                                 : std::optional<FigureGridError>();
+    return e ? e->band : std::nan("");
 }
 
 /// Steady points joined by a line, unsteady (time-averaged) ones as markers on their own.
@@ -47,6 +59,24 @@ std::vector<ChartSeries> regime_series(const std::vector<PointRecord>& p, double
     return out;
 }
 
+/// Error bars on the regime series (the first one or two of the chart) where the sweep ran its
+/// coarser grids (--error-bars): ± the grid error band of Cl and Cd.
+void add_grid_error_bars(Chart& c, const std::vector<PointRecord>& p, double PointRecord::*x,
+                         double PointRecord::*y) {
+    ChartErrorBars steady{0, {}, {}}, unsteady{1, {}, {}};
+    bool any = false;
+    for (const PointRecord& r : p) {
+        ChartErrorBars& b = r.regime == "unsteady" ? unsteady : steady;
+        b.x_error.push_back(grid_band(r, x)), b.y_error.push_back(grid_band(r, y));
+        any = any || std::isfinite(b.x_error.back()) || std::isfinite(b.y_error.back());
+    }
+    if (!any) return;
+    c.error_bars = {steady};
+    if (c.series.size() > 1 && !unsteady.y_error.empty()) c.error_bars.push_back(unsteady);
+    for (std::size_t k = 0; k < c.error_bars.size(); ++k)
+        c.series[k].label += " (bars: grid error band)";
+}
+
 void draw_polar(const std::vector<PointRecord>& p, const PolarFigures& f, const fs::path& file,
                 double PointRecord::*x, double PointRecord::*y, const std::string& x_label,
                 const std::string& y_label, bool marks) {
@@ -55,6 +85,7 @@ void draw_polar(const std::vector<PointRecord>& p, const PolarFigures& f, const 
     c.x_label = x_label;
     c.y_label = y_label;
     c.series = regime_series(p, x, y, y_label);
+    add_grid_error_bars(c, p, x, y);
     if (marks) c.marks = polar_marks(f);
     if (y == &PointRecord::cl && x == &PointRecord::alpha) {
         ChartSeries momentum{"Cl, control volume", {}, {}, false, true, false, 2};

@@ -69,6 +69,14 @@ std::string number(const std::optional<double>& v, const char* format = "{:.5f}"
     return v && std::isfinite(*v) ? fmt::format(fmt::runtime(format), *v) : std::string("–");
 }
 
+/// A figure with its grid error band (sweeps with --error-bars), e.g. "1.07450 ± 0.00312 (p 1.9,
+/// monotone)".
+std::string with_band(double value, const std::optional<FigureGridError>& e) {
+    if (!e) return number(value);
+    return fmt::format("{} ± {} (p {:.2f}, {})", number(value), number(e->band), e->order,
+                       e->verdict);
+}
+
 std::string angle_range(const std::vector<double>& angles) {
     if (angles.empty()) return "none";
     const auto [lo, hi] = std::minmax_element(angles.begin(), angles.end());
@@ -142,12 +150,27 @@ ReportTable run_results_table(const nlohmann::json& s) {
 
 ReportTable sweep_figures_table(const nlohmann::json& s) {
     ReportTable t{"Figures of the polar (from summary.json)", {{"figure", "value"}}};
-    add_labelled_rows(
-        t, s,
-        {"points", "missing_points", "lift_slope_per_deg", "lift_slope_per_rad", "linear_range",
-         "alpha_zero_lift", "cl_max", "alpha_cl_max", "stall_in_range", "alpha_separation_onset",
-         "cd_min", "alpha_cd_min", "max_lift_disagreement", "unsteady_points", "failed_points",
-         "wall_seconds_points"});
+    add_labelled_rows(t, s,
+                      {"points",
+                       "missing_points",
+                       "lift_slope_per_deg",
+                       "lift_slope_per_rad",
+                       "linear_range",
+                       "alpha_zero_lift",
+                       "cl_max",
+                       "cl_max_uncertainty",
+                       "alpha_cl_max",
+                       "alpha_cl_max_uncertainty",
+                       "stall_in_range",
+                       "stall_bracketed",
+                       "stall_search",
+                       "alpha_separation_onset",
+                       "cd_min",
+                       "alpha_cd_min",
+                       "max_lift_disagreement",
+                       "unsteady_points",
+                       "failed_points",
+                       "wall_seconds_points"});
     for (auto& row : t.rows)  // the linear range as a range, not an object
         if (row[0].rfind("linear range", 0) == 0 && s["linear_range"].is_object())
             row[1] = fmt::format(
@@ -169,8 +192,10 @@ ReportTable polar_points_table(const std::vector<PointRecord>& p) {
         std::string basis = r.cl_basis;
         if (r.cl_steady) basis += fmt::format(" (converged steady Cl {:.5f})", *r.cl_steady);
         t.rows.push_back(
-            {fmt::format("{:g}", r.alpha), r.regime, number(r.cl), basis, number(r.cd),
-             number(r.cm), number(r.cl_momentum),
+            {fmt::format("{:g}", r.alpha),
+             r.added_for.empty() ? r.regime : r.regime + " (added: " + r.added_for + ")",
+             with_band(r.cl, r.cl_grid), basis, with_band(r.cd, r.cd_grid), number(r.cm),
+             number(r.cl_momentum),
              number(r.separation_upper, "{:.3f}") + " / " + number(r.reattachment_upper, "{:.3f}"),
              number(r.separation_lower, "{:.3f}"), number(r.strouhal, "{:.4f}"),
              r.regime == "unsteady" ? number(r.cl_amplitude) : "–",

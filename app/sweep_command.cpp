@@ -2,7 +2,9 @@
 // polar (DIR/polar.csv, DIR/summary.json). Under an MPI launcher the points are spread over the
 // ranks in contiguous blocks; each block's first point starts from the free stream.
 #include <fmt/format.h>
+#include <fmt/ranges.h>
 
+#include <algorithm>
 #include <chrono>
 #include <cmath>
 #include <cstdio>
@@ -16,10 +18,15 @@
 #include "app/progress_line.hpp"
 #include "app/reader_labels.hpp"
 #include "app/section_notes.hpp"
+#include "app/stall_search.hpp"
 #include "app/sweep_angles.hpp"
+#include "app/sweep_block.hpp"
+#include "app/sweep_coarser_grids.hpp"
+#include "app/sweep_error_bars.hpp"
 #include "app/sweep_plan.hpp"
 #include "app/sweep_point.hpp"
 #include "app/sweep_ranks.hpp"
+#include "app/sweep_stall_rounds.hpp"
 #include "io/case_file.hpp"
 #include "io/json_writer.hpp"
 #include "io/output_dir.hpp"
@@ -41,87 +48,29 @@ std::vector<std::size_t> points_to_run(const SweepOptions& o, std::size_t count,
         if (ranks.rank() != 0) return {};
         return {static_cast<std::size_t>(o.point_index)};
     }
-    const auto [first, last] = rank_block(count, ranks.rank(), ranks.size());
-    std::vector<std::size_t> mine;
-    for (std::size_t k = first; k < last; ++k) mine.push_back(k);
-    return mine;
+    return block_indices(count, ranks);
 }
 
-void say_point(const PointRecord& r, std::size_t k, std::size_t count, bool reused) {
-    const std::string steady =
-        r.cl_steady ? fmt::format("; converged steady Cl {:.5f}", *r.cl_steady) : std::string();
-    const std::string contour = r.cl_momentum && r.contour_distance
-                                    ? fmt::format("; Cl {:.5f} by the {}", *r.cl_momentum,
-                                                  control_volume_label(*r.contour_distance, false))
-                                    : std::string();
-    fmt::print(
-        "point {}/{} alpha {:+.2f} deg: {}{}, surface Cl {:.5f} Cd {:.5f} Cm {:.5f} ({}{}){}{} ({} "
-        "iterations, {:.1f} s)\n",
-        k + 1, count, r.alpha, r.regime, reused ? " (done earlier)" : "", r.cl, r.cd, r.cm,
-        r.cl_basis, steady, contour,
-        r.strouhal ? fmt::format(", St {:.4f}", *r.strouhal) : std::string(), r.iterations,
-        r.wall_seconds);
-    std::fflush(stdout);
+/// The screen line of Cl max and how well the sweep's angles pin it down.
+void say_cl_max(const std::vector<PointRecord>& records, const std::string& search) {
+    const PolarFigures f = polar_figures(records);
+    if (!f.stall) return;
+    const StallBracket& b = *f.stall;
+    if (b.bracketed && b.alpha_uncertainty && b.cl_uncertainty)
+        fmt::print(
+            "Cl max {:.4f} at {:g} +- {:g} deg, bracketed (a lower Cl on each side; "
+            "unsteady points by their mean Cl); the parabola through it and its "
+            "neighbours peaks {:.4f} higher\n",
+            b.cl_max, b.alpha_cl_max, *b.alpha_uncertainty, *b.cl_uncertainty);
+    else
+        fmt::print("Cl max {:.4f} at {:g} deg, the {} angle: stall not bracketed{}\n", b.cl_max,
+                   b.alpha_cl_max, b.alpha_cl_max >= records.back().alpha ? "highest" : "lowest",
+                   search.empty() ? std::string() : " (stall search: " + search + ")");
 }
 
-struct BlockResult {
-    std::vector<PointRecord> records;
-    bool interrupted = false;
-};
-
-/// Runs (or finds finished) the points `mine`, each starting from the previous one's fields.
-BlockResult run_block(const SweepOptions& o, const SweepCase& sweep,
-                      const std::vector<double>& angles, const std::vector<std::size_t>& mine,
-                      const StructuredGrid& grid) {
-    BlockResult b;
-    std::vector<CaseSpec> specs;  // each point's case, derived once from the text read once
-    specs.reserve(mine.size());
-    for (std::size_t k : mine) specs.push_back(point_case(sweep, angles[k]));
-    std::optional<FlowFields> previous;  // the fields the next point starts from
-    const auto start = std::chrono::steady_clock::now();
-    int ran = 0;
-    for (std::size_t n = 0; n < mine.size(); ++n) {
-        const std::size_t k = mine[n];
-        const fs::path dir = o.out_dir / point_folder_name(angles[k]);
-        if (std::optional<PointRecord> done = finished_point(dir, specs[n].text)) {
-            say_point(*done, k, angles.size(), true);
-            previous.reset();
-            const bool next_needs_it =
-                n + 1 < mine.size() &&
-                !finished_point(o.out_dir / point_folder_name(angles[mine[n + 1]]),
-                                specs[n + 1].text);
-            if (next_needs_it) previous = finished_point_fields(dir, *done, grid);
-            b.records.push_back(*done);
-            continue;
-        }
-        const double elapsed =
-            std::chrono::duration<double>(std::chrono::steady_clock::now() - start).count();
-        const std::string left =
-            ran > 0 ? format_duration(elapsed / ran * static_cast<double>(mine.size() - n)) : "?";
-        const std::string label = fmt::format("[point {}/{} alpha {:+.2f}, sweep left {}] ", k + 1,
-                                              angles.size(), angles[k], left);
-        PointOutcome out = run_sweep_point(sweep, angles[k], specs[n], grid, o.out_dir,
-                                           previous ? &*previous : nullptr, label);
-        ++ran;
-        if (out.interrupted) {
-            b.interrupted = true;
-            return b;
-        }
-        say_point(*out.record, k, angles.size(), false);
-        b.records.push_back(*out.record);
-        previous = std::move(out.fields);  // a failed point leaves none: the next starts afresh
-    }
-    return b;
-}
-
-std::string records_text(const std::vector<PointRecord>& records) {
-    nlohmann::json a = nlohmann::json::array();
-    for (const PointRecord& r : records) a.push_back(record_to_json(r));
-    return a.dump();
-}
-
-int write_polar(const fs::path& dir, const std::vector<PointRecord>& records,
-                const std::vector<double>& angles) {
+int write_polar(const fs::path& dir, std::vector<PointRecord> records, const SweepPlan& plan) {
+    const std::vector<double> angles = all_angles(plan);
+    if (plan.error_bars) attach_grid_errors(dir, *plan.error_bars, records);
     std::vector<double> missing;
     for (double a : angles) {
         const bool found = std::any_of(records.begin(), records.end(), [&](const PointRecord& r) {
@@ -129,14 +78,23 @@ int write_polar(const fs::path& dir, const std::vector<PointRecord>& records,
         });
         if (!found) missing.push_back(a);
     }
-    write_polar_files(dir, records, missing);
+    write_polar_files(dir, records, missing, plan.stall_search);
     int failed = 0;
     for (const PointRecord& r : records) failed += r.regime == "failed";
     fmt::print("polar of {} points written: {} and {}\n", records.size(),
                (dir / "polar.csv").string(), (dir / "summary.json").string());
+    std::sort(records.begin(), records.end(),
+              [](const auto& a, const auto& b) { return a.alpha < b.alpha; });
+    if (!records.empty()) say_cl_max(records, plan.stall_search);
     if (!missing.empty()) fmt::print("{} points have no result yet\n", missing.size());
     if (failed) fmt::print(stderr, "veer: {} points failed (see their sweep_point.json)\n", failed);
     return failed || !missing.empty() ? 1 : 0;
+}
+
+/// Every angle of the polar (requested and added by the stall search), on every rank.
+std::vector<double> polar_angles(const SweepPlan& plan, const SweepRanks& ranks) {
+    const std::string text = ranks.is_root() ? nlohmann::json(all_angles(plan)).dump() : "";
+    return nlohmann::json::parse(ranks.broadcast_from_root(text)).get<std::vector<double>>();
 }
 
 int run_sweep(const SweepOptions& o, const SweepRanks& ranks) {
@@ -146,10 +104,23 @@ int run_sweep(const SweepOptions& o, const SweepRanks& ranks) {
     const CaseSpec base = parse_case_source(sweep.source, sweep.overrides);
     sweep.stability_time = o.stability_time;
     std::optional<FolderLock> lock;  // the root holds the sweep folder for the whole sweep
+    SweepPlan plan;
+    plan.case_file = sweep.source.path;
+    plan.overrides = sweep.overrides;
+    plan.angles = angles;
+    plan.steady_steps = o.steady_steps;
+    plan.unsteady_time = o.unsteady_time;
+    plan.ranks = ranks.size();
+    const bool search = stall_search_on(o, base);
+    if (!search)
+        plan.stall_search = o.stall_search == "off" ? "off (--stall-search off)"
+                                                    : "off (Re below 1e4: --stall-search on asks)";
     if (ranks.is_root()) {
         lock.emplace(prepare_output_dir(o.out_dir, base.text, o.force));
-        write_sweep_plan(o.out_dir, {sweep.source.path, sweep.overrides, angles, o.steady_steps,
-                                     o.unsteady_time, ranks.size()});
+        if (o.gather)  // the grids of an earlier run with error bars, to gather their points
+            if (const std::optional<SweepPlan> earlier = read_sweep_plan(o.out_dir))
+                plan.error_bars = earlier->error_bars;
+        write_sweep_plan(o.out_dir, plan);
     }
     ranks.barrier();
     if (o.gather) {
@@ -159,10 +130,18 @@ int run_sweep(const SweepOptions& o, const SweepRanks& ranks) {
             if (auto r =
                     finished_point(o.out_dir / point_folder_name(a), point_case(sweep, a).text))
                 records.push_back(*r);
-        return write_polar(o.out_dir, records, angles);
+        if (search) gather_stall_points(o, sweep, plan, records);
+        write_sweep_plan(o.out_dir, plan);
+        return write_polar(o.out_dir, records, plan);
     }
     const std::vector<std::size_t> mine_points = points_to_run(o, angles.size(), ranks);
     MeshBuild mesh = build_mesh(base);
+    std::optional<CoarserGrids> coarser;  // made before any point runs: a bad family stops here
+    if (o.error_bars && o.point_index < 0) {
+        coarser = coarser_grids(sweep, base, static_cast<long>(mesh.grid.ni()) * mesh.grid.nj(),
+                                o.error_bar_ratio);
+        plan.error_bars = coarser->grids;
+    }
     if (ranks.is_root()) {
         for (const std::string& w : mesh.quality.warnings) fmt::print("mesh warning: {}\n", w);
         fmt::print("{}: grid {}, Re {:g}, {}, {} points on {} process{}\n", base.geometry.name,
@@ -187,22 +166,29 @@ int run_sweep(const SweepOptions& o, const SweepRanks& ranks) {
     }
     const bool interrupted = ranks.any(mine.interrupted);
     const std::vector<std::string> texts = ranks.gather_on_root(records_text(mine.records));
-    if (!ranks.is_root()) return interrupted ? 130 : 0;
     if (interrupted) {
-        if (!mine.interrupted || ranks.size() == 1)
+        if (ranks.is_root() && (!mine.interrupted || ranks.size() == 1))
             fmt::print(stderr, "veer: sweep interrupted; run the same command again to continue\n");
         return 130;
     }
     if (o.point_index >= 0) {
-        fmt::print("point {} done; gather the sweep with veer report {}\n", o.point_index,
-                   o.out_dir.string());
+        if (ranks.is_root())
+            fmt::print("point {} done; gather the sweep with veer report {}\n", o.point_index,
+                       o.out_dir.string());
         return 0;
     }
-    std::vector<PointRecord> records;
-    for (const std::string& t : texts)
-        for (const nlohmann::json& j : nlohmann::json::parse(t))
-            records.push_back(record_from_json(j, "rank record"));
-    return write_polar(o.out_dir, records, angles);
+    std::vector<PointRecord> records = records_from_texts(texts);
+    const bool stopped =
+        (search && run_stall_search(o, sweep, plan, records, mesh.grid, ranks)) ||
+        (coarser && run_coarser_grids(o, *coarser, polar_angles(plan, ranks), ranks));
+    if (stopped) {
+        if (ranks.is_root())
+            fmt::print(stderr, "veer: sweep interrupted; run the same command again to continue\n");
+        return 130;
+    }
+    if (!ranks.is_root()) return 0;
+    write_sweep_plan(o.out_dir, plan);
+    return write_polar(o.out_dir, records, plan);
 }
 
 }  // namespace

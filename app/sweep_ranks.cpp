@@ -77,6 +77,15 @@ std::vector<std::string> SweepRanks::gather_on_root(const std::string& mine) con
     return texts;
 }
 
+std::string SweepRanks::broadcast_from_root(const std::string& text) const {
+    if (!m_mpi) return text;
+    int length = is_root() ? static_cast<int>(text.size()) : 0;
+    MPI_Bcast(&length, 1, MPI_INT, 0, MPI_COMM_WORLD);
+    std::string out = is_root() ? text : std::string(static_cast<std::size_t>(length), '\0');
+    MPI_Bcast(out.data(), length, MPI_CHAR, 0, MPI_COMM_WORLD);
+    return out;
+}
+
 bool SweepRanks::any(bool mine) const {
     if (!m_mpi) return mine;
     int in = mine ? 1 : 0, out = 0;
@@ -97,6 +106,7 @@ void SweepRanks::barrier() const {}
 std::vector<std::string> SweepRanks::gather_on_root(const std::string& mine) const {
     return {mine};
 }
+std::string SweepRanks::broadcast_from_root(const std::string& text) const { return text; }
 bool SweepRanks::any(bool mine) const { return mine; }
 void SweepRanks::abort(int code) const { std::exit(code); }
 

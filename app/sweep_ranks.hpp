@@ -22,6 +22,8 @@ public:
     void barrier() const;
     /// Every rank's text, in rank order, on rank 0 (empty on the others).
     std::vector<std::string> gather_on_root(const std::string& mine) const;
+    /// Rank 0's text on every rank (what the others pass is ignored).
+    std::string broadcast_from_root(const std::string& text) const;
     /// Whether any rank passed true (all ranks get the answer).
     bool any(bool mine) const;
     /// Ends every rank at once (after an error on one of them).

@@ -2,12 +2,22 @@
 /// What the sweep keeps of one point: DIR/alpha_+04.00/sweep_point.json. The polar is built from
 /// these records only, so a sweep can be gathered again from its folders (after an interrupted
 /// run, after job-array points, after an MPI run).
+#include <array>
 #include <filesystem>
 #include <nlohmann/json.hpp>
 #include <optional>
 #include <string>
 
 namespace veer {
+
+/// One figure's grid convergence over a sweep's three grids (postprocess/grid_convergence.hpp).
+struct FigureGridError {
+    std::array<double, 2> coarser = {};  ///< the figure on the two coarser grids
+    double order = 0.0;                  ///< observed order (0 when the values did not change)
+    double band = 0.0;                   ///< absolute error band of the finest value
+    double gci = 0.0;                    ///< band / |finest value| (GCI_fine)
+    std::string verdict;                 ///< verdict_name: "monotone", "oscillatory", ...
+};
 
 /// One point of a sweep as the polar sees it. Coefficients are time averages over whole cycles
 /// for unsteady points, the converged values for steady ones.
@@ -50,6 +60,12 @@ struct PointRecord {
     long iterations = 0;  ///< steps of the steady attempt plus the time-accurate run
     double wall_seconds = 0.0;
     std::string case_text;  ///< the steady point's case text: same text, same point
+    /// Why the sweep added the point (its stall search, app/stall_search.hpp); empty for a
+    /// requested angle. Set from the sweep plan, not kept in the point's record; no comma.
+    std::string added_for;
+    /// The discretisation error of cl and cd from the sweep's coarser grids (--error-bars,
+    /// app/sweep_error_bars.hpp); none without them. Set when the polar is gathered.
+    std::optional<FigureGridError> cl_grid, cd_grid;
 };
 
 /// x/c aft of which a separation of the upper surface is the trailing edge's own and does not

@@ -26,16 +26,35 @@ struct Frame {
     }
 };
 
+/// The error bar's half-length at point k along one axis; 0 when there is none.
+double error_at(const std::vector<double>& error, std::size_t k) {
+    return k < error.size() && std::isfinite(error[k]) ? std::abs(error[k]) : 0.0;
+}
+
+/// The error bars of series `n` of a chart, or none.
+const ChartErrorBars* bars_of(const Chart& c, std::size_t n) {
+    for (const ChartErrorBars& b : c.error_bars)
+        if (b.series == n) return &b;
+    return nullptr;
+}
+
 void data_range(const Chart& c, bool along_x, double& lo, double& hi) {
     lo = std::numeric_limits<double>::infinity();
     hi = -lo;
-    for (const ChartSeries& s : c.series)
+    static const std::vector<double> none;
+    for (std::size_t n = 0; n < c.series.size(); ++n) {
+        const ChartSeries& s = c.series[n];
+        const ChartErrorBars* bars = bars_of(c, n);
+        const std::vector<double>& error = bars ? (along_x ? bars->x_error : bars->y_error) : none;
         for (std::size_t k = 0; k < s.x.size() && k < s.y.size(); ++k) {
             const double v = along_x ? s.x[k] : s.y[k];
             if (!std::isfinite(s.x[k]) || !std::isfinite(s.y[k])) continue;
             if (!along_x && c.y_scale == AxisScale::logarithmic && v <= 0) continue;
-            lo = std::min(lo, v), hi = std::max(hi, v);
+            const double e = error_at(error, k);
+            const bool log_axis = !along_x && c.y_scale == AxisScale::logarithmic;
+            lo = std::min(lo, log_axis && v - e <= 0 ? v : v - e), hi = std::max(hi, v + e);
         }
+    }
     if (along_x)
         for (const ChartMark& m : c.marks) lo = std::min(lo, m.x), hi = std::max(hi, m.x);
 }
@@ -97,7 +116,31 @@ void draw_axes(Canvas& cv, const Chart& c, const Frame& f) {
         cv.text(c.title, f.left + 0.5 * f.width, 26, 15, TextAnchor::centre, ink, false, true);
 }
 
-void draw_series(Canvas& cv, const ChartSeries& s, Colour col, const Frame& f) {
+/// Whiskers with end caps of 4 px; on a logarithmic axis the lower end stays above zero.
+void draw_error_bars(Canvas& cv, const ChartSeries& s, const ChartErrorBars& bars, Colour col,
+                     const Frame& f) {
+    constexpr double cap = 4.0;
+    for (std::size_t k = 0; k < s.x.size() && k < s.y.size(); ++k) {
+        if (!std::isfinite(s.x[k]) || !std::isfinite(s.y[k])) continue;
+        const double px = f.px(s.x[k]), py = f.py(s.y[k]);
+        if (const double e = error_at(bars.y_error, k); e > 0.0) {
+            const double lower = f.log_y && s.y[k] - e <= 0 ? s.y[k] : s.y[k] - e;
+            const double y0 = f.py(lower), y1 = f.py(s.y[k] + e);
+            cv.line(px, y0, px, y1, col, 1.2);
+            cv.line(px - cap, y0, px + cap, y0, col, 1.2);
+            cv.line(px - cap, y1, px + cap, y1, col, 1.2);
+        }
+        if (const double e = error_at(bars.x_error, k); e > 0.0) {
+            const double x0 = f.px(s.x[k] - e), x1 = f.px(s.x[k] + e);
+            cv.line(x0, py, x1, py, col, 1.2);
+            cv.line(x0, py - cap, x0, py + cap, col, 1.2);
+            cv.line(x1, py - cap, x1, py + cap, col, 1.2);
+        }
+    }
+}
+
+void draw_series(Canvas& cv, const ChartSeries& s, const ChartErrorBars* bars, Colour col,
+                 const Frame& f) {
     cairo_t* cr = cv.context();
     cairo_save(cr);
     cairo_rectangle(cr, f.left, f.top, f.width, f.height);
@@ -127,6 +170,7 @@ void draw_series(Canvas& cv, const ChartSeries& s, Colour col, const Frame& f) {
         cairo_stroke(cr);
         cairo_set_dash(cr, dash, 0, 0.0);
     }
+    if (bars) draw_error_bars(cv, s, *bars, col, f);
     if (s.markers)
         for (std::size_t k = 0; k < n; ++k)
             if (ok(k)) cv.marker(f.px(s.x[k]), f.py(s.y[k]), col);
@@ -195,7 +239,8 @@ void write_chart(const Chart& chart, const std::filesystem::path& path, int widt
         cv.line(f.px(m.x), f.top, f.px(m.x), f.top + f.height, mark_ink, 1.2, true);
     for (std::size_t k = 0; k < chart.series.size(); ++k) {
         const ChartSeries& s = chart.series[k];
-        draw_series(cv, s, series_colour(s.colour >= 0 ? s.colour : static_cast<int>(k)), f);
+        draw_series(cv, s, bars_of(chart, k),
+                    series_colour(s.colour >= 0 ? s.colour : static_cast<int>(k)), f);
     }
     draw_legend(cv, chart, f);
     draw_mark_labels(cv, chart, f);

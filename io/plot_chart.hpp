@@ -20,6 +20,14 @@ struct ChartSeries {
     int colour = -1;  ///< palette index (series_colour); -1: the series' position
 };
 
+/// Error bars of one series (Chart::series[series]): half-lengths along y (and x) at each of
+/// its points, drawn as whiskers with end caps in the series' colour; empty for none, a
+/// non-finite or zero entry for none at that point.
+struct ChartErrorBars {
+    std::size_t series = 0;
+    std::vector<double> y_error, x_error;
+};
+
 /// A vertical line at an abscissa, labelled at the top of the plot.
 struct ChartMark {
     double x = 0.0;
@@ -33,6 +41,7 @@ struct Chart {
     std::string x_label, y_label;
     std::vector<ChartSeries> series;
     std::vector<ChartMark> marks;
+    std::vector<ChartErrorBars> error_bars;
     AxisScale y_scale = AxisScale::linear;
     bool y_reversed = false;    ///< e.g. Cp, negative upwards
     bool equal_aspect = false;  ///< one unit on x as long as one on y (section outlines)
