@@ -9,7 +9,7 @@ namespace veer {
 namespace {
 
 /// summary.json keys (a run's and a sweep's) and what a reader is shown for them.
-constexpr std::array<std::pair<std::string_view, FigureLabel>, 45> labels = {{
+constexpr std::array<std::pair<std::string_view, FigureLabel>, 49> labels = {{
     {"section", {"section", ""}},
     {"reynolds", {"Reynolds number (on the chord)", ""}},
     {"alpha", {"angle of attack", "deg"}},
