@@ -32,18 +32,24 @@ bool is_stale_temporary(const fs::path& file) {
 
 namespace {
 // Without fsync a crash soon after the rename could leave the new name pointing at data that never
-// reached the disk; the rename is then no guarantee at all.
-void flush_to_disk(const fs::path& file) {
+// reached the disk; the rename is then no guarantee at all. File systems that allocate late report
+// a full disk only here, so a failed fsync is a failed write.
+bool flush_to_disk(const fs::path& file) {
     const int fd = ::open(file.c_str(), O_RDONLY);
-    if (fd < 0) return;  // the rename below reports a missing file
-    ::fsync(fd);
+    if (fd < 0) return true;  // the rename below reports a missing file
+    const bool flushed = ::fsync(fd) == 0;
     ::close(fd);
+    return flushed;
 }
 }  // namespace
 
 void commit_temporary(const fs::path& tmp, const fs::path& target) {
-    flush_to_disk(tmp);
     std::error_code ec;
+    if (!flush_to_disk(tmp)) {
+        fs::remove(tmp, ec);
+        throw InputError(target.string() + ": the new version (" + tmp.string() +
+                         ") did not reach the disk (is it full?); the previous file is kept");
+    }
     fs::rename(tmp, target, ec);
     if (ec) {
         const std::string why = ec.message();  // before remove() reuses ec

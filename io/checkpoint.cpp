@@ -187,6 +187,22 @@ CheckpointData read_layout(hid_t file, const fs::path& path) {
     return data;
 }
 
+/// Reads the new file back before it replaces the last good one: a full disk can swallow a
+/// buffered write without any call reporting it (seen with the disk filling during a write), and a
+/// checkpoint that does not restart must never take the good one's place.
+void verify_written(const fs::path& tmp) {
+    Handle access = hdf5::strict_file_access();
+    Handle file(H5Fopen(tmp.c_str(), H5F_ACC_RDONLY, access.get()), H5Fclose,
+                "reading back " + tmp.string());
+    try {
+        read_layout(file.get(), tmp);
+    } catch (const InputError&) {
+        throw hdf5::Hdf5Error("read back, it is not a whole veer checkpoint");
+    } catch (const hdf5::Hdf5Error& e) {
+        throw hdf5::Hdf5Error(std::string("read back, ") + e.what());
+    }
+}
+
 }  // namespace
 
 void write_checkpoint(const fs::path& path, const CheckpointData& data) {
@@ -195,6 +211,7 @@ void write_checkpoint(const fs::path& path, const CheckpointData& data) {
     const hdf5::SilenceErrors quiet;
     try {
         write_file(tmp, data);
+        verify_written(tmp);
     } catch (const hdf5::Hdf5Error& e) {
         std::error_code ec;
         fs::remove(tmp, ec);

@@ -253,9 +253,11 @@ void write_doubles(hid_t parent, const std::string& name, const std::vector<doub
                         H5P_DEFAULT),
              H5Dclose, "dataset '" + name + "'");
     write_attribute(d.get(), checksum_attribute, hash_of(values));
-    if (values.empty()) return;
-    check_status(H5Dwrite(d.get(), H5T_NATIVE_DOUBLE, H5S_ALL, H5S_ALL, H5P_DEFAULT, values.data()),
-                 "dataset '" + name + "'");
+    if (!values.empty())
+        check_status(
+            H5Dwrite(d.get(), H5T_NATIVE_DOUBLE, H5S_ALL, H5S_ALL, H5P_DEFAULT, values.data()),
+            "dataset '" + name + "'");
+    d.close("dataset '" + name + "'");  // small data waits in a buffer until here
 }
 
 std::vector<double> read_doubles(hid_t parent, const std::string& name,
@@ -278,9 +280,11 @@ void write_ints(hid_t parent, const std::string& name, const std::vector<std::in
                         H5P_DEFAULT),
              H5Dclose, "dataset '" + name + "'");
     write_attribute(d.get(), checksum_attribute, hash_of(values));
-    if (values.empty()) return;
-    check_status(H5Dwrite(d.get(), H5T_NATIVE_INT64, H5S_ALL, H5S_ALL, H5P_DEFAULT, values.data()),
-                 "dataset '" + name + "'");
+    if (!values.empty())
+        check_status(
+            H5Dwrite(d.get(), H5T_NATIVE_INT64, H5S_ALL, H5S_ALL, H5P_DEFAULT, values.data()),
+            "dataset '" + name + "'");
+    d.close("dataset '" + name + "'");  // small data waits in a buffer until here
 }
 
 std::vector<std::int64_t> read_ints(hid_t parent, const std::string& name) {
@@ -316,12 +320,15 @@ void write_strings(hid_t parent, const std::string& name, const std::vector<std:
                         H5P_DEFAULT),
              H5Dclose, "dataset '" + name + "'");
     write_attribute(d.get(), checksum_attribute, hash_of(values));
-    if (values.empty()) return;
-    std::vector<char> bytes(values.size() * size, '\0');
-    for (std::size_t k = 0; k < values.size(); ++k)
-        std::copy(values[k].begin(), values[k].end(), bytes.begin() + static_cast<long>(k * size));
-    check_status(H5Dwrite(d.get(), t.get(), H5S_ALL, H5S_ALL, H5P_DEFAULT, bytes.data()),
-                 "dataset '" + name + "'");
+    if (!values.empty()) {
+        std::vector<char> bytes(values.size() * size, '\0');
+        for (std::size_t k = 0; k < values.size(); ++k)
+            std::copy(values[k].begin(), values[k].end(),
+                      bytes.begin() + static_cast<long>(k * size));
+        check_status(H5Dwrite(d.get(), t.get(), H5S_ALL, H5S_ALL, H5P_DEFAULT, bytes.data()),
+                     "dataset '" + name + "'");
+    }
+    d.close("dataset '" + name + "'");  // small data waits in a buffer until here
 }
 
 std::vector<std::string> read_strings(hid_t parent, const std::string& name) {
