@@ -21,7 +21,10 @@
 namespace veer::test {
 
 /// Re_x where the largest n~ across the layer first reaches `n_crit` (NaN if not by 1e8).
-inline double blasius_amplification_onset(double wall_curvature, double n_crit) {
+/// `diffusion_scale` multiplies n~'s diffusivity (the model's: 1, sigma_n = 1 with nu_t = 0), to
+/// measure how much of the onset the diffusion sets.
+inline double blasius_amplification_onset(double wall_curvature, double n_crit,
+                                          double diffusion_scale = 1.0) {
     const double h = 0.01, eta_end = 12.0;
     const auto n_eta = static_cast<std::size_t>(eta_end / h) + 1;
     std::vector<double> f(n_eta), fp(n_eta), fpp(n_eta);
@@ -55,9 +58,10 @@ inline double blasius_amplification_onset(double wall_curvature, double n_crit) 
         for (std::size_t k = 1; k + 1 < n_eta; ++k) {
             const double eta = h * static_cast<double>(k);
             const bool critical = eta * eta * fpp[k] * root >= re_v0[k];
-            a[k] = -(1.0 / (h * h) - f[k] / (4.0 * h));
-            c[k] = -(1.0 / (h * h) + f[k] / (4.0 * h));
-            b[k] = fp[k] / step + 2.0 / (h * h);
+            const double diffusion = diffusion_scale / (h * h);
+            a[k] = -(diffusion - f[k] / (4.0 * h));
+            c[k] = -(diffusion + f[k] / (4.0 * h));
+            b[k] = fp[k] / step + 2.0 * diffusion;
             r[k] = fp[k] * n[k] / step + (critical ? root * gain[k] : 0.0);
         }
         a[0] = 0.0, b[0] = 1.0, c[0] = -1.0, r[0] = 0.0;  // dn/deta = 0
