@@ -19,6 +19,7 @@
 #include <vector>
 
 #include "../../reference_table.hpp"
+#include "../../similarity_rk4.hpp"
 #include "../../validation/blasius_amplification.hpp"
 #include "solver/transition_correlations.hpp"
 
@@ -27,25 +28,13 @@ namespace {
 
 constexpr double step = 0.002, eta_end = 10.0;
 
-/// f, f', f'' on eta = 0, step, ... eta_end for wall curvature f''(0) (classical RK4).
+/// f, f', f'' on eta = 0, step, ... eta_end for wall curvature f''(0).
 std::vector<std::array<double, 3>> falkner_skan(double beta, double wall_curvature) {
     const auto rhs = [beta](const std::array<double, 3>& y) {
         return std::array<double, 3>{y[1], y[2], -y[0] * y[2] - beta * (1.0 - y[1] * y[1])};
     };
-    std::vector<std::array<double, 3>> rows;
-    std::array<double, 3> s{0.0, 0.0, wall_curvature};
-    for (double eta = 0.0; eta <= eta_end + 0.5 * step; eta += step) {
-        rows.push_back(s);
-        std::array<std::array<double, 3>, 4> g;
-        std::array<double, 3> t = s;
-        for (int st = 0; st < 4; ++st) {
-            g[st] = rhs(t);
-            for (int c = 0; c < 3; ++c) t[c] = s[c] + (st < 2 ? 0.5 * step : step) * g[st][c];
-        }
-        for (int c = 0; c < 3; ++c)
-            s[c] += step / 6.0 * (g[0][c] + 2.0 * g[1][c] + 2.0 * g[2][c] + g[3][c]);
-    }
-    return rows;
+    const auto count = static_cast<std::size_t>(std::lround(eta_end / step)) + 1;
+    return test::similarity_rk4(rhs, {0.0, 0.0, wall_curvature}, step, count);
 }
 
 /// f''(0) with f'(eta_end) = 1, by bisection (f'(eta_end) rises with f''(0) near the solution).
