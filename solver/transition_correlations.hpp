@@ -10,6 +10,11 @@
 /// SA-BCM: Cakmakcioglu, Bas, Mura & Kaynak, AIAA 2020-2706 (2020).
 /// Critical amplification factor from the free-stream turbulence: Mack 1977 (NASA CR-153203),
 /// with the limiter tau = 2.5 tanh(Tu / 2.5) the TMR page gives.
+///
+/// What the SA-AFT correlations stand for (checked on Falkner-Skan layers,
+/// tests/unit/solver/test_aft_growth_on_falkner_skan.cpp): evaluated at y = delta*, H12(H_L) is
+/// the layer's delta*/theta, k_V its Re_V / Re_theta and D(H12) its u / (theta Omega), so the n~
+/// source per unit length there is the e^N envelope's dn/dRe_theta dRe_theta/dx.
 
 namespace veer {
 

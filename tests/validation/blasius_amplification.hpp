@@ -16,30 +16,25 @@
 #include <cmath>
 #include <vector>
 
+#include "../similarity_rk4.hpp"
 #include "solver/transition_correlations.hpp"
 
 namespace veer::test {
 
 /// Re_x where the largest n~ across the layer first reaches `n_crit` (NaN if not by 1e8).
-inline double blasius_amplification_onset(double wall_curvature, double n_crit) {
+/// `diffusion_scale` multiplies n~'s diffusivity (the model's: 1, sigma_n = 1 with nu_t = 0), to
+/// measure how much of the onset the diffusion sets.
+inline double blasius_amplification_onset(double wall_curvature, double n_crit,
+                                          double diffusion_scale = 1.0) {
     const double h = 0.01, eta_end = 12.0;
     const auto n_eta = static_cast<std::size_t>(eta_end / h) + 1;
-    std::vector<double> f(n_eta), fp(n_eta), fpp(n_eta);
-    std::array<double, 3> s{0.0, 0.0, wall_curvature};
     const auto rhs = [](const std::array<double, 3>& y) {
         return std::array<double, 3>{y[1], y[2], -0.5 * y[0] * y[2]};
     };
-    for (std::size_t k = 0; k < n_eta; ++k) {  // classical RK4 in eta
-        f[k] = s[0], fp[k] = s[1], fpp[k] = s[2];
-        std::array<std::array<double, 3>, 4> g;
-        std::array<double, 3> t = s;
-        for (int st = 0; st < 4; ++st) {
-            g[st] = rhs(t);
-            for (int c = 0; c < 3; ++c) t[c] = s[c] + (st < 2 ? 0.5 * h : h) * g[st][c];
-        }
-        for (int c = 0; c < 3; ++c)
-            s[c] += h / 6.0 * (g[0][c] + 2 * g[1][c] + 2 * g[2][c] + g[3][c]);
-    }
+    const auto rows = similarity_rk4(rhs, {0.0, 0.0, wall_curvature}, h, n_eta);
+    std::vector<double> f(n_eta), fp(n_eta), fpp(n_eta);
+    for (std::size_t k = 0; k < n_eta; ++k)
+        f[k] = rows[k][0], fp[k] = rows[k][1], fpp[k] = rows[k][2];
     std::vector<double> h12(n_eta), re_v0(n_eta), gain(n_eta);
     for (std::size_t k = 0; k < n_eta; ++k) {
         const double eta = h * static_cast<double>(k);
@@ -55,9 +50,10 @@ inline double blasius_amplification_onset(double wall_curvature, double n_crit) 
         for (std::size_t k = 1; k + 1 < n_eta; ++k) {
             const double eta = h * static_cast<double>(k);
             const bool critical = eta * eta * fpp[k] * root >= re_v0[k];
-            a[k] = -(1.0 / (h * h) - f[k] / (4.0 * h));
-            c[k] = -(1.0 / (h * h) + f[k] / (4.0 * h));
-            b[k] = fp[k] / step + 2.0 / (h * h);
+            const double diffusion = diffusion_scale / (h * h);
+            a[k] = -(diffusion - f[k] / (4.0 * h));
+            c[k] = -(diffusion + f[k] / (4.0 * h));
+            b[k] = fp[k] / step + 2.0 * diffusion;
             r[k] = fp[k] * n[k] / step + (critical ? root * gain[k] : 0.0);
         }
         a[0] = 0.0, b[0] = 1.0, c[0] = -1.0, r[0] = 0.0;  // dn/deta = 0
