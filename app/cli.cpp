@@ -110,6 +110,9 @@ CLI::App* add_grid_study_subcommand(CLI::App& app, GridStudyOptions& o) {
                       "the case's own grid is the finest (default) or the middle of the three");
     study->add_flag("--far-boundary", o.far_boundary,
                     "also run the finest grid with the far field twice as far");
+    study->add_flag("--same-surface-spacing", o.scale_surface_slope,
+                    "scale the cap on the surface spacing's growth (surface_slope) with the "
+                    "cells, so that the three grids share one surface spacing distribution");
     study->add_flag("--force", o.force, "write into folders that hold another study");
     study->add_flag("-q,--quiet", o.quiet, "no live progress line");
     study->footer("e.g. veer grid-study CASE -o DIR --far-boundary\n\n" +

@@ -58,6 +58,8 @@ struct GridStudyOptions {
     double ratio = 1.41421356237;  ///< refinement ratio, each dimension (sqrt 2: half the cells)
     std::string case_grid = "finest";  ///< which grid the case's own is: finest or middle
     bool far_boundary = false;         ///< also the finest grid with the far field twice as far
+    /// scale the surface spacing's growth cap with the cells (one surface spacing distribution)
+    bool scale_surface_slope = false;
     bool force = false;
     bool quiet = false;
 };

@@ -22,7 +22,7 @@ int run_grid_study_command(const GridStudyOptions& o) {
     GridStudyResult r;
     r.plan = plan_grid_study(spec, o.ratio,
                              o.case_grid == "finest" ? CaseGridRole::finest : CaseGridRole::middle,
-                             o.far_boundary);
+                             o.far_boundary, o.scale_surface_slope);
     const FolderLock lock = prepare_output_dir(o.out_dir, spec.text, o.force);
     for (const StudyGrid& g : r.plan.grids)
         r.runs.push_back(run_study_grid(o.input, g, o.out_dir / g.name, o.force, o.quiet));

@@ -23,7 +23,8 @@ int rounded_count(double n, int least) {
 }
 
 /// The grid `coarsening` times coarser than the case's own (negative: finer).
-StudyGrid scaled_grid(const CaseSpec& spec, double ratio, int coarsening, std::string name) {
+StudyGrid scaled_grid(const CaseSpec& spec, double ratio, int coarsening, std::string name,
+                      bool scale_surface_slope) {
     const double s = std::pow(ratio, coarsening);
     StudyGrid g;
     g.name = std::move(name);
@@ -35,6 +36,10 @@ StudyGrid scaled_grid(const CaseSpec& spec, double ratio, int coarsening, std::s
         g.y_plus = *spec.y_plus * s;
     else
         g.first_cell = spec.mesh.first_cell * s;
+    // The cap on the surface spacing's growth (d spacing / d arc length) scales with the cell
+    // size: with one cap for all, it binds on the coarse members and not on the fine ones, and
+    // the members' spacing distributions differ (mesh/surface_sampling.hpp).
+    if (scale_surface_slope && coarsening != 0) g.surface_slope = spec.mesh.surface_slope * s;
     return g;
 }
 
@@ -42,6 +47,8 @@ void write_overrides(StudyGrid& g) {
     g.overrides = {fmt::format("mesh.around={}", g.around), fmt::format("mesh.normal={}", g.normal),
                    fmt::format("mesh.wake={}", g.wake),
                    fmt::format("mesh.far_field={:.17g}", g.far_field)};
+    if (g.surface_slope)
+        g.overrides.push_back(fmt::format("mesh.surface_slope={:.17g}", *g.surface_slope));
     if (g.y_plus) g.overrides.push_back(fmt::format("mesh.y_plus={:.17g}", *g.y_plus));
     if (g.first_cell) g.overrides.push_back(fmt::format("mesh.first_cell={:.17g}", *g.first_cell));
 }
@@ -74,7 +81,7 @@ StudyGrid doubled_far_field(const CaseSpec& spec, const StudyGrid& fine) {
 }  // namespace
 
 GridStudyPlan plan_grid_study(const CaseSpec& spec, double ratio, CaseGridRole role,
-                              bool far_boundary) {
+                              bool far_boundary, bool scale_surface_slope) {
     if (!(ratio >= smallest_refinement_ratio && ratio <= 2.0))
         throw InputError(fmt::format(
             "grid study: refinement ratio {:g}; give a ratio from {:g} (Celik et al. 2008 "
@@ -88,9 +95,9 @@ GridStudyPlan plan_grid_study(const CaseSpec& spec, double ratio, CaseGridRole r
     plan.ratio = ratio;
     plan.role = role;
     const int finest = role == CaseGridRole::finest ? 0 : -1;
-    plan.grids = {scaled_grid(spec, ratio, finest, "fine"),
-                  scaled_grid(spec, ratio, finest + 1, "medium"),
-                  scaled_grid(spec, ratio, finest + 2, "coarse")};
+    plan.grids = {scaled_grid(spec, ratio, finest, "fine", scale_surface_slope),
+                  scaled_grid(spec, ratio, finest + 1, "medium", scale_surface_slope),
+                  scaled_grid(spec, ratio, finest + 2, "coarse", scale_surface_slope)};
     if (far_boundary) plan.far_boundary = doubled_far_field(spec, plan.grids.front());
     for (StudyGrid& g : plan.grids) write_overrides(g);
     if (plan.far_boundary) write_overrides(*plan.far_boundary);

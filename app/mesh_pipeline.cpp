@@ -31,7 +31,7 @@ MeshBuild build_mesh(const CaseSpec& c) {
         b.surface = b.section.points;
         b.grid = generate_ogrid(b.surface, b.spec);
     } else {
-        b.surface = sample_surface(b.section, b.spec.around);
+        b.surface = sample_surface(b.section, b.spec.around, b.spec.surface_slope);
         try {
             b.grid = generate_cgrid(b.surface, b.spec);
         } catch (const GridFoldError& fold) {

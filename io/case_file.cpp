@@ -227,7 +227,13 @@ void read_mesh(const toml::table* t, const std::string& source, CaseSpec& c) {
     c.y_plus = r.number("y_plus", 0.01, 500.0, "a wall-unit target from 0.01 to 500");
     m.max_growth =
         r.number("max_growth", 1.01, 2.0, "a ratio from 1.01 to 2").value_or(m.max_growth);
-    r.reject_unknown("around, normal, wake, far_field, first_cell, y_plus, max_growth");
+    m.surface_slope = r.number("surface_slope", 0.01, 2.0, "a growth rate from 0.01 to 2")
+                          .value_or(m.surface_slope);
+    if (c.geometry.circle && r.has("surface_slope"))
+        r.fail(*t->get("surface_slope"), "surface_slope", std::to_string(m.surface_slope),
+               "no surface_slope key with circle = true (its wall nodes lie at equal angles)");
+    r.reject_unknown(
+        "around, normal, wake, far_field, first_cell, y_plus, max_growth, surface_slope");
     if (first && c.y_plus)
         throw InputError(source + ": [mesh] give first_cell or y_plus, not both");
     if (first) m.first_cell = *first;

@@ -15,11 +15,10 @@ namespace {
 ///   target(TE)    = c / (1 + curvature_length * max kappa): the trailing-edge cell matches the
 ///                   leading-edge one;
 ///   h = the largest function below target whose slope |dh/dsigma| <= max_slope, so neighbouring
-///       spacings differ by about max_slope (10%);
+///       spacings differ by about max_slope (default 10%, surface_sampling.hpp);
 /// and c is chosen so that the integral of dsigma / h over the half is the half's cell count.
 /// Nodes are then placed at equal steps of that integral.
 constexpr double curvature_length = 0.04;  ///< chords; sets how strongly curvature clusters
-constexpr double max_slope = 0.1;          ///< neighbouring spacing ratio about 1.1
 constexpr int samples_per_cell = 40;       ///< fine samples of the spacing function
 /// Curvature is measured as the tangent's turn over +-curvature_window (chords) divided by the
 /// window: the nose (radius >= 0.004 for a 6% section) is resolved, while the wiggles a spline
@@ -57,7 +56,7 @@ SpacingTable spacing_targets(const ParametricSpline& spline, double s_le, int ce
 
 /// Largest function below `scale * target` with slope at most max_slope (forward and backward
 /// sweeps), and the running integral of dsigma / h (trapezoid rule).
-std::vector<double> cell_count_integral(const SpacingTable& t, double scale) {
+std::vector<double> cell_count_integral(const SpacingTable& t, double scale, double max_slope) {
     const std::size_t n = t.sigma.size();
     std::vector<double> h(n);
     for (std::size_t k = 0; k < n; ++k) h[k] = scale * t.target[k];
@@ -76,14 +75,15 @@ std::vector<double> cell_count_integral(const SpacingTable& t, double scale) {
 }
 
 /// Node parameters sigma_0 = 0 ... sigma_cells = half length for one half.
-std::vector<double> half_nodes(const ParametricSpline& spline, double s_le, int cells) {
+std::vector<double> half_nodes(const ParametricSpline& spline, double s_le, int cells,
+                               double max_slope) {
     const SpacingTable t = spacing_targets(spline, s_le, cells);
     double lo = 1e-8, hi = 10.0 * t.sigma.back();  // count falls as the scale grows
     for (int it = 0; it < 60; ++it) {  // geometric bisection: 60 halvings reach round-off
         const double mid = std::sqrt(lo * hi);
-        (cell_count_integral(t, mid).back() > cells ? lo : hi) = mid;
+        (cell_count_integral(t, mid, max_slope).back() > cells ? lo : hi) = mid;
     }
-    const std::vector<double> count = cell_count_integral(t, hi);
+    const std::vector<double> count = cell_count_integral(t, hi, max_slope);
     std::vector<double> sigma(static_cast<std::size_t>(cells) + 1, 0.0);
     std::size_t k = 1;
     for (int i = 1; i < cells; ++i) {  // invert the running count by linear interpolation
@@ -98,10 +98,11 @@ std::vector<double> half_nodes(const ParametricSpline& spline, double s_le, int 
 
 /// Nodes of the half that runs from points[le] to points.back(), on the spline through all points
 /// (so the leading edge is interpolated smoothly across both surfaces).
-std::vector<Vec2> sample_half(const std::vector<Vec2>& points, std::size_t le, int cells) {
+std::vector<Vec2> sample_half(const std::vector<Vec2>& points, std::size_t le, int cells,
+                              double max_slope) {
     const ParametricSpline spline(points);
     const double s_le = spline.knots()[le];
-    const std::vector<double> sigma = half_nodes(spline, s_le, cells);
+    const std::vector<double> sigma = half_nodes(spline, s_le, cells, max_slope);
     std::vector<Vec2> nodes(sigma.size());
     for (std::size_t i = 0; i < sigma.size(); ++i) nodes[i] = spline.position(s_le + sigma[i]);
     nodes.front() = points[le];
@@ -111,12 +112,15 @@ std::vector<Vec2> sample_half(const std::vector<Vec2>& points, std::size_t le, i
 
 }  // namespace
 
-std::vector<Vec2> sample_surface(const Section& s, int around) {
+std::vector<Vec2> sample_surface(const Section& s, int around, double max_slope) {
     if (around < 8 || around % 2 != 0) {
         throw InputError("around = " + std::to_string(around) +
                          ": the cells along the section must be an even number (the leading edge "
                          "is node around/2), at least 8");
     }
+    if (!(max_slope > 0.0 && std::isfinite(max_slope)))
+        throw InputError("surface_slope = " + std::to_string(max_slope) +
+                         ": the growth of the surface spacing must be a positive number");
     VEER_VERIFY(s.points.size() >= 3 && s.leading_edge > 0 && s.leading_edge + 1 < s.points.size(),
                 "a section with a leading edge between its trailing-edge ends");
     const int half = around / 2;
@@ -124,8 +128,8 @@ std::vector<Vec2> sample_surface(const Section& s, int around) {
     // like the upper half: the same operations on mirrored data give mirrored nodes exactly.
     std::vector<Vec2> reversed(s.points.rbegin(), s.points.rend());
     const std::vector<Vec2> lower =
-        sample_half(reversed, s.points.size() - 1 - s.leading_edge, half);
-    const std::vector<Vec2> upper = sample_half(s.points, s.leading_edge, half);
+        sample_half(reversed, s.points.size() - 1 - s.leading_edge, half, max_slope);
+    const std::vector<Vec2> upper = sample_half(s.points, s.leading_edge, half, max_slope);
     std::vector<Vec2> nodes(lower.rbegin(), lower.rend());
     nodes.insert(nodes.end(), upper.begin() + 1, upper.end());
     return nodes;

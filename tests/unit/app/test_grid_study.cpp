@@ -39,6 +39,16 @@ TEST(GridStudyPlan, OneRatioOnEveryDimensionRoundedToMultiplesOfFour) {
     EXPECT_EQ(p.grids[2].wake, 12);
     EXPECT_NEAR(*p.grids[1].first_cell, 2e-3 * std::sqrt(2.0), 1e-15);
     EXPECT_NEAR(*p.grids[2].first_cell, 4e-3, 1e-15);
+    for (const StudyGrid& g : p.grids) EXPECT_FALSE(g.surface_slope);  // not asked for
+    // Asked for, the surface spacing's growth cap scales too (one spacing distribution for the
+    // family); the case's own grid keeps its own.
+    const GridStudyPlan same = plan_grid_study(read_case_file(tmp / "c.toml"), std::sqrt(2.0),
+                                               CaseGridRole::finest, false, true);
+    EXPECT_FALSE(same.grids[0].surface_slope);
+    EXPECT_NEAR(*same.grids[1].surface_slope, default_surface_slope * std::sqrt(2.0), 1e-15);
+    EXPECT_NEAR(*same.grids[2].surface_slope, 2 * default_surface_slope, 1e-15);
+    EXPECT_EQ(same.grids[2].overrides[4], "mesh.surface_slope=0.20000000000000001");
+    EXPECT_EQ(same.grids[1].around, p.grids[1].around);
     for (const StudyGrid& g : p.grids) EXPECT_EQ(g.far_field, 20.0);  // far field fixed
     EXPECT_FALSE(p.far_boundary);
     // The case's grid as the middle one: the finest is refined from it.
@@ -47,6 +57,10 @@ TEST(GridStudyPlan, OneRatioOnEveryDimensionRoundedToMultiplesOfFour) {
     EXPECT_EQ(m.grids[0].around, 192);
     EXPECT_EQ(m.grids[1].around, 128);
     EXPECT_EQ(m.grids[2].around, 84);  // 85.3 -> 84
+    const GridStudyPlan ms =
+        plan_grid_study(read_case_file(tmp / "c.toml"), 1.5, CaseGridRole::middle, false, true);
+    EXPECT_NEAR(*ms.grids[0].surface_slope, default_surface_slope / 1.5, 1e-15);
+    EXPECT_FALSE(ms.grids[1].surface_slope);
 }
 
 TEST(GridStudyPlan, YPlusTargetScalesWithTheRatio) {

@@ -238,6 +238,20 @@ TEST(CaseFile, InvalidTomlGivesLine) {
     EXPECT_NE(msg.find("case.toml:2"), std::string::npos) << msg;
 }
 
+TEST(CaseFile, SurfaceSlopeIsReadCheckedAndNamed) {
+    EXPECT_DOUBLE_EQ(parse_case_text(minimal_case, "case.toml", ".").mesh.surface_slope,
+                     default_surface_slope);
+    EXPECT_DOUBLE_EQ(parse_case_text(minimal_case, "case.toml", ".", {"mesh.surface_slope=0.2"})
+                         .mesh.surface_slope,
+                     0.2);
+    const std::string msg = error_of(minimal_case, {"mesh.surface_slope=0"});
+    EXPECT_NE(msg.find("surface_slope"), std::string::npos) << msg;
+    EXPECT_NE(msg.find("0.01 to 2"), std::string::npos) << msg;
+    const char* circle = "[geometry]\ncircle = true\n[flow]\nreynolds = 100\n";
+    EXPECT_NE(error_of(circle, {"mesh.surface_slope=0.2"}).find("no surface_slope key"),
+              std::string::npos);
+}
+
 TEST(CaseFile, CircleIsASectionOfItsOwn) {
     const char* circle =
         "[geometry]\ncircle = true\n[mesh]\naround = 128\nfar_field = 60\n"
