@@ -101,6 +101,39 @@ std::string periodicity_note(const ForceRecord& h) {
            " (its averages still hold part of the start-up; a longer --unsteady-time settles it)";
 }
 
+/// Why a steady attempt did not converge: stalled (the plateau rule) or at its step cap.
+std::string not_settled_note(const SweepCase& sweep, const CaseSpec& spec, bool stalled,
+                             long steps) {
+    return stalled ? fmt::format(
+                         "the steady iteration stalled (its residual fell less than {:g} times "
+                         "over {} iterations while Cl kept moving) after {} iterations",
+                         sweep.plateau.required_drop, sweep.plateau.window, steps)
+                   : fmt::format("the steady iteration did not settle in {} iterations",
+                                 spec.run.steps);
+}
+
+/// A steady attempt circling inside the bounded-cycle band: its means, with the half band as
+/// the point's own uncertainty (cl_amplitude and the others), never "converged steady".
+void take_bounded_cycle(PointRecord& r, const BoundedCycle& c, const std::string& why) {
+    r.regime = "steady";
+    r.status = "bounded cycle";
+    r.cl_basis =
+        fmt::format("settled in a bounded cycle: mean over its last {} iterations", c.iterations);
+    r.cl = c.cl;
+    r.cd = c.cd;
+    r.cm = c.cm;
+    r.cl_amplitude = c.cl_half_band;
+    r.cd_amplitude = c.cd_half_band;
+    r.cm_amplitude = c.cm_half_band;
+    r.cycles = c.cycles;
+    r.note = fmt::format(
+        "{}; its forces circle in a bounded cycle ({} cycles over the last {} iterations: Cl "
+        "{:.5f} +- {:.2e}, Cd {:.5f} +- {:.2e}, half peak-to-peak), reported as the cycle's mean "
+        "with that band as its uncertainty; the control-volume lift and the surface pictures are "
+        "of the last iteration",
+        why, c.cycles, c.iterations, c.cl, c.cl_half_band, c.cd, c.cd_half_band);
+}
+
 struct RunPiece {
     RunResult result;
     std::unique_ptr<Simulation> sim;
@@ -292,6 +325,11 @@ PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const CaseSpe
     r.iterations = p.result.steps;
     r.wall_seconds = p.result.wall_seconds;
     r.status = stalled ? "stalled" : status_word(p.result.status);
+    const std::optional<BoundedCycle> cycle =
+        steady_mode && p.result.status == RunStatus::step_cap
+            ? bounded_cycle(p.sim->force_history().cl, p.sim->force_history().cd,
+                            p.sim->force_history().cm, sweep.cycle)
+            : std::nullopt;
     switch (p.result.status) {
         case RunStatus::interrupted:
             out.interrupted = true;
@@ -303,15 +341,8 @@ PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const CaseSpe
             out.record = r;
             return out;
         case RunStatus::step_cap:
-            if (steady_mode) {
-                r.note =
-                    stalled ? fmt::format(
-                                  "the steady iteration stalled (its residual fell less than "
-                                  "{:g} times over {} iterations while Cl kept moving) after "
-                                  "{} iterations",
-                                  sweep.plateau.required_drop, sweep.plateau.window, p.result.steps)
-                            : fmt::format("the steady iteration did not settle in {} iterations",
-                                          spec.run.steps);
+            if (steady_mode && !cycle) {
+                r.note = not_settled_note(sweep, spec, stalled, p.result.steps);
                 const TimeAccurateStart from{p.sim->solver().fields(), 0.0, 0.0};
                 run_time_accurate(r, out, sweep, alpha, grid, dir, from, label);
                 if (out.interrupted) return out;
@@ -323,10 +354,13 @@ PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const CaseSpe
             r.cl = p.result.forces.cl.total;
             r.cd = p.result.forces.cd.total;
             r.cm = p.result.forces.cm.total;
+            if (cycle)
+                take_bounded_cycle(r, *cycle,
+                                   not_settled_note(sweep, spec, stalled, p.result.steps));
             r.cl_momentum = p.momentum_lift();
             if (p.analysis) add_separation(r, *p.analysis);
             out.fields = p.sim->solver().fields();
-            if (steady_mode && p.result.status == RunStatus::converged &&
+            if (steady_mode && (p.result.status == RunStatus::converged || cycle) &&
                 sweep.stability_time > 0 && upper_surface_needs_stability_check(r)) {
                 const TimeAccurateStart check{disturbed(p.sim->solver().fields(), p.sim->metrics()),
                                               sweep.stability_time, r.cl};
