@@ -72,7 +72,7 @@ CLI::App* add_sweep_subcommand(CLI::App& app, SweepOptions& o) {
         ->add_option("--cycle-band", o.cycle_band,
                      "a steady attempt that stops converging but whose Cl circles within this "
                      "fraction peak to peak (Cd within ten times it) is reported as the cycle's "
-                     "mean with that band (default 0.001; 0: it goes time-accurate)")
+                     "mean with that band (default 0.005; 0: it goes time-accurate)")
         ->check(CLI::Range(0.0, 0.05));
     sweep
         ->add_option("--stall-search", o.stall_search,

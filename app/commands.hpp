@@ -43,7 +43,7 @@ struct SweepOptions {
     /// A steady attempt that stops converging but circles within this fraction of |Cl| (peak to
     /// peak; Cd within ten times it) is reported as its cycle's mean (app/bounded_cycle.hpp);
     /// 0: such points go time-accurate.
-    double cycle_band = 1e-3;
+    double cycle_band = 5e-3;
     /// Stall search after the requested angles (app/stall_search.hpp): "on", "off" or "auto"
     /// (on from Reynolds number 1e4 up: below it a section's lift rises past 20 degrees).
     std::string stall_search = "auto";

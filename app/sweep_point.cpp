@@ -117,8 +117,10 @@ std::string not_settled_note(const SweepCase& sweep, const CaseSpec& spec, bool 
 void take_bounded_cycle(PointRecord& r, const BoundedCycle& c, const std::string& why) {
     r.regime = "steady";
     r.status = "bounded cycle";
-    r.cl_basis =
-        fmt::format("settled in a bounded cycle: mean over its last {} iterations", c.iterations);
+    r.cl_basis = fmt::format(
+        "settled in a bounded cycle: mean over its last {} iterations; Cl +- {:.1e} Cd +- {:.1e} "
+        "(half peak-to-peak)",
+        c.iterations, c.cl_half_band, c.cd_half_band);
     r.cl = c.cl;
     r.cd = c.cd;
     r.cm = c.cm;
