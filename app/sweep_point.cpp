@@ -6,6 +6,7 @@
 #include <memory>
 
 #include "app/model_range_note.hpp"
+#include "app/point_bounded_cycle.hpp"
 #include "app/residual_plateau.hpp"
 #include "app/run_report.hpp"
 #include "app/simulation.hpp"
@@ -110,30 +111,6 @@ std::string not_settled_note(const SweepCase& sweep, const CaseSpec& spec, bool 
                          sweep.plateau.required_drop, sweep.plateau.window, steps)
                    : fmt::format("the steady iteration did not settle in {} iterations",
                                  spec.run.steps);
-}
-
-/// A steady attempt circling inside the bounded-cycle band: its means, with the half band as
-/// the point's own uncertainty (cl_amplitude and the others), never "converged steady".
-void take_bounded_cycle(PointRecord& r, const BoundedCycle& c, const std::string& why) {
-    r.regime = "steady";
-    r.status = "bounded cycle";
-    r.cl_basis = fmt::format(
-        "settled in a bounded cycle: mean over its last {} iterations; Cl +- {:.1e} Cd +- {:.1e} "
-        "(half peak-to-peak)",
-        c.iterations, c.cl_half_band, c.cd_half_band);
-    r.cl = c.cl;
-    r.cd = c.cd;
-    r.cm = c.cm;
-    r.cl_amplitude = c.cl_half_band;
-    r.cd_amplitude = c.cd_half_band;
-    r.cm_amplitude = c.cm_half_band;
-    r.cycles = c.cycles;
-    r.note = fmt::format(
-        "{}; its forces circle in a bounded cycle ({} cycles over the last {} iterations: Cl "
-        "{:.5f} +- {:.2e}, Cd {:.5f} +- {:.2e}, half peak-to-peak), reported as the cycle's mean "
-        "with that band as its uncertainty; the control-volume lift and the surface pictures are "
-        "of the last iteration",
-        why, c.cycles, c.iterations, c.cl, c.cl_half_band, c.cd, c.cd_half_band);
 }
 
 struct RunPiece {
