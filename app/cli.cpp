@@ -69,6 +69,12 @@ CLI::App* add_sweep_subcommand(CLI::App& app, SweepOptions& o) {
                      "(chords / free-stream speed; 0: no check)")
         ->check(CLI::NonNegativeNumber);
     sweep
+        ->add_option("--cycle-band", o.cycle_band,
+                     "a steady attempt that stops converging but whose Cl circles within this "
+                     "fraction peak to peak (Cd within ten times it) is reported as the cycle's "
+                     "mean with that band (default 0.005; 0: it goes time-accurate)")
+        ->check(CLI::Range(0.0, 0.05));
+    sweep
         ->add_option("--stall-search", o.stall_search,
                      "go on past the last angle until Cl falls, then halve the step around Cl max "
                      "to 0.5 deg: on, off, auto (on from Re 1e4 up; default)")

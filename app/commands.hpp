@@ -40,6 +40,10 @@ struct SweepOptions {
     long steady_steps = 0;      ///< > 0: step cap of each steady attempt
     double unsteady_time = 0;   ///< > 0: end time of time-accurate points
     double stability_time = 6;  ///< disturbed time-accurate check of separated points; 0: none
+    /// A steady attempt that stops converging but circles within this fraction of |Cl| (peak to
+    /// peak; Cd within ten times it) is reported as its cycle's mean (app/bounded_cycle.hpp);
+    /// 0: such points go time-accurate.
+    double cycle_band = 5e-3;
     /// Stall search after the requested angles (app/stall_search.hpp): "on", "off" or "auto"
     /// (on from Reynolds number 1e4 up: below it a section's lift rises past 20 degrees).
     std::string stall_search = "auto";

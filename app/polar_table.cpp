@@ -102,15 +102,17 @@ nlohmann::json summary_json(const std::vector<PointRecord>& points,
         s["linear_range"] = nullptr;
     add_stall_bracket(s, f, search);
     s["grid_errors"] = grid_errors_json(points);
-    int unsteady = 0, failed = 0;
+    int unsteady = 0, failed = 0, bounded = 0;
     double wall = 0.0;
     for (const PointRecord& r : points) {
         unsteady += r.regime == "unsteady";
         failed += r.regime == "failed";
+        bounded += r.status == "bounded cycle";
         wall += r.wall_seconds;
     }
     s["unsteady_points"] = unsteady;
     s["failed_points"] = failed;
+    s["bounded_cycle_points"] = bounded;
     s["wall_seconds_points"] = wall;
     s["model_warning"] = nullptr;
     for (const PointRecord& r : points)

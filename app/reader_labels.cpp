@@ -9,7 +9,7 @@ namespace veer {
 namespace {
 
 /// summary.json keys (a run's and a sweep's) and what a reader is shown for them.
-constexpr std::array<std::pair<std::string_view, FigureLabel>, 49> labels = {{
+constexpr std::array<std::pair<std::string_view, FigureLabel>, 50> labels = {{
     {"section", {"section", ""}},
     {"reynolds", {"Reynolds number (on the chord)", ""}},
     {"alpha", {"angle of attack", "deg"}},
@@ -53,6 +53,7 @@ constexpr std::array<std::pair<std::string_view, FigureLabel>, 49> labels = {{
     {"alpha_cd_min", {"angle of the least Cd", "deg"}},
     {"unsteady_points", {"points run time-accurately", ""}},
     {"failed_points", {"failed points", ""}},
+    {"bounded_cycle_points", {"points settled in a bounded cycle (mean with its band)", ""}},
     {"wall_seconds_points", {"wall time of the points", "s"}},
     {"far_field_circulation", {"far-field vortex strength (circulation)", "U c"}},
     {"base_cp", {"base Cp (rear point)", ""}},

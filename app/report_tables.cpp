@@ -170,6 +170,7 @@ ReportTable sweep_figures_table(const nlohmann::json& s) {
                        "max_lift_disagreement",
                        "unsteady_points",
                        "failed_points",
+                       "bounded_cycle_points",
                        "wall_seconds_points"});
     for (auto& row : t.rows)  // the linear range as a range, not an object
         if (row[0].rfind("linear range", 0) == 0 && s["linear_range"].is_object())
@@ -198,7 +199,7 @@ ReportTable polar_points_table(const std::vector<PointRecord>& p) {
              number(r.cl_momentum),
              number(r.separation_upper, "{:.3f}") + " / " + number(r.reattachment_upper, "{:.3f}"),
              number(r.separation_lower, "{:.3f}"), number(r.strouhal, "{:.4f}"),
-             r.regime == "unsteady" ? number(r.cl_amplitude) : "–",
+             r.regime == "unsteady" || r.status == "bounded cycle" ? number(r.cl_amplitude) : "–",
              fmt::format("{} ({:.1f})", r.iterations, r.wall_seconds)});
     }
     return t;

@@ -5,6 +5,7 @@
 #include <algorithm>
 #include <chrono>
 #include <cmath>
+#include <map>
 #include <numbers>
 
 #include "app/free_stream_reference.hpp"
@@ -184,12 +185,25 @@ std::string Simulation::divergence_diagnosis(const StepReport& r) const {
                                  ? fmt::format("the last good state is {} (step {})",
                                                checkpoint_path().string(), m_last_checkpoint_step)
                                  : std::string("no checkpoint was written before it");
+    std::string origin;
+    if (!r.finite && !m_recent_worst.empty()) {
+        std::map<std::pair<int, int>, int> led;
+        for (const auto& c : m_recent_worst) ++led[c];
+        const auto top = std::max_element(led.begin(), led.end(), [](const auto& a, const auto& b) {
+            return a.second < b.second;
+        });
+        const Vec2 w = m_metrics.centroid[m_metrics.cell(top->first.first, top->first.second)];
+        origin = fmt::format(
+            " (the first such cell in memory order); the largest change of the velocity was in "
+            "cell ({}, {}) at x = {:.4f}, y = {:.4f} chords in {} of the last {} finite steps",
+            top->first.first, top->first.second, w.x, w.y, top->second, m_recent_worst.size());
+    }
     return fmt::format(
-        "run diverged at step {}: {} is {} in cell ({}, {}) at x = {:.4f}, y = {:.4f} chords; {}. "
-        "Try a smaller [run] cfl, a finer or smoother grid near that point, or mode = "
+        "run diverged at step {}: {} is {} in cell ({}, {}) at x = {:.4f}, y = {:.4f} chords{}; "
+        "{}. Try a smaller [run] cfl, a finer or smoother grid near that point, or mode = "
         "\"unsteady\" if the flow does not settle",
         r.step, r.worst_variable, r.finite ? "growing without bound" : "not finite", r.worst_i,
-        r.worst_j, where.x, where.y, kept);
+        r.worst_j, where.x, where.y, origin, kept);
 }
 
 RunResult Simulation::run() {
@@ -232,6 +246,8 @@ RunResult Simulation::run() {
             res.diagnosis = divergence_diagnosis(r);
             break;
         }
+        m_recent_worst.emplace_back(r.worst_i, r.worst_j);
+        if (m_recent_worst.size() > 20) m_recent_worst.pop_front();
         if (has_wall)
             res.forces = integrate_surface_forces(m_grid, m_metrics, m_solver->fields(),
                                                   m_spec.flow, surface_force_options(m_spec));

@@ -2,6 +2,7 @@
 /// The Simulation schedules a run: it owns the clock (time steps from the CFL target), the stop
 /// criteria (convergence, step cap, end time), divergence checks, the history, field frames and
 /// checkpoints. The solver only steps.
+#include <deque>
 #include <filesystem>
 #include <functional>
 #include <memory>
@@ -95,6 +96,11 @@ private:
     ConvergenceMonitor m_monitor;
     bool m_resumed = false;
     long m_last_checkpoint_step = -1;
+    /// The worst cell (largest change) of each of the last finite steps: a field that turns
+    /// non-finite does so everywhere at once after a line solve, so its first non-finite cell in
+    /// memory order says nothing about where the blow-up began; the cell that led most often
+    /// over the last steps does.
+    std::deque<std::pair<int, int>> m_recent_worst;
     ForceRecord m_forces;
 };
 

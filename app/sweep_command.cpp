@@ -103,6 +103,11 @@ int run_sweep(const SweepOptions& o, const SweepRanks& ranks) {
                     o.steady_steps, o.unsteady_time, !o.quiet};
     const CaseSpec base = parse_case_source(sweep.source, sweep.overrides);
     sweep.stability_time = o.stability_time;
+    if (o.cycle_band > 0) {
+        sweep.cycle = BoundedCycleCriteria{};
+        sweep.cycle.cl_fraction = o.cycle_band;
+        sweep.cycle.cd_fraction = 10.0 * o.cycle_band;
+    }
     std::optional<FolderLock> lock;  // the root holds the sweep folder for the whole sweep
     SweepPlan plan;
     plan.case_file = sweep.source.path;

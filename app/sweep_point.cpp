@@ -6,6 +6,7 @@
 #include <memory>
 
 #include "app/model_range_note.hpp"
+#include "app/point_bounded_cycle.hpp"
 #include "app/residual_plateau.hpp"
 #include "app/run_report.hpp"
 #include "app/simulation.hpp"
@@ -99,6 +100,17 @@ std::string periodicity_note(const ForceRecord& h) {
     if (!s || s->periodic) return "";
     return "; not yet periodic over its last whole cycles: " + s->not_periodic +
            " (its averages still hold part of the start-up; a longer --unsteady-time settles it)";
+}
+
+/// Why a steady attempt did not converge: stalled (the plateau rule) or at its step cap.
+std::string not_settled_note(const SweepCase& sweep, const CaseSpec& spec, bool stalled,
+                             long steps) {
+    return stalled ? fmt::format(
+                         "the steady iteration stalled (its residual fell less than {:g} times "
+                         "over {} iterations while Cl kept moving) after {} iterations",
+                         sweep.plateau.required_drop, sweep.plateau.window, steps)
+                   : fmt::format("the steady iteration did not settle in {} iterations",
+                                 spec.run.steps);
 }
 
 struct RunPiece {
@@ -292,6 +304,11 @@ PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const CaseSpe
     r.iterations = p.result.steps;
     r.wall_seconds = p.result.wall_seconds;
     r.status = stalled ? "stalled" : status_word(p.result.status);
+    const std::optional<BoundedCycle> cycle =
+        steady_mode && p.result.status == RunStatus::step_cap
+            ? bounded_cycle(p.sim->force_history().cl, p.sim->force_history().cd,
+                            p.sim->force_history().cm, sweep.cycle)
+            : std::nullopt;
     switch (p.result.status) {
         case RunStatus::interrupted:
             out.interrupted = true;
@@ -303,15 +320,8 @@ PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const CaseSpe
             out.record = r;
             return out;
         case RunStatus::step_cap:
-            if (steady_mode) {
-                r.note =
-                    stalled ? fmt::format(
-                                  "the steady iteration stalled (its residual fell less than "
-                                  "{:g} times over {} iterations while Cl kept moving) after "
-                                  "{} iterations",
-                                  sweep.plateau.required_drop, sweep.plateau.window, p.result.steps)
-                            : fmt::format("the steady iteration did not settle in {} iterations",
-                                          spec.run.steps);
+            if (steady_mode && !cycle) {
+                r.note = not_settled_note(sweep, spec, stalled, p.result.steps);
                 const TimeAccurateStart from{p.sim->solver().fields(), 0.0, 0.0};
                 run_time_accurate(r, out, sweep, alpha, grid, dir, from, label);
                 if (out.interrupted) return out;
@@ -323,10 +333,13 @@ PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const CaseSpe
             r.cl = p.result.forces.cl.total;
             r.cd = p.result.forces.cd.total;
             r.cm = p.result.forces.cm.total;
+            if (cycle)
+                take_bounded_cycle(r, *cycle,
+                                   not_settled_note(sweep, spec, stalled, p.result.steps));
             r.cl_momentum = p.momentum_lift();
             if (p.analysis) add_separation(r, *p.analysis);
             out.fields = p.sim->solver().fields();
-            if (steady_mode && p.result.status == RunStatus::converged &&
+            if (steady_mode && (p.result.status == RunStatus::converged || cycle) &&
                 sweep.stability_time > 0 && upper_surface_needs_stability_check(r)) {
                 const TimeAccurateStart check{disturbed(p.sim->solver().fields(), p.sim->metrics()),
                                               sweep.stability_time, r.cl};

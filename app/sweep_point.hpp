@@ -8,6 +8,7 @@
 #include <string>
 #include <vector>
 
+#include "app/bounded_cycle.hpp"
 #include "app/residual_plateau.hpp"
 #include "app/sweep_record.hpp"
 #include "io/case_file.hpp"
@@ -30,6 +31,10 @@ struct SweepCase {
     /// time-accurately for this long (chords / free-stream speed) to see whether the flow keeps
     /// it (app/sweep_stability.hpp); 0: no check.
     double stability_time = 0.0;
+    /// A steady attempt that reaches its cap or stalls is reported as the mean of a bounded
+    /// cycle when its forces circle inside this band (app/bounded_cycle.hpp); window 0: never,
+    /// it goes time-accurate.
+    BoundedCycleCriteria cycle = {0};
 };
 
 /// The overrides of the steady attempt at `alpha` (the user's, then the sweep's).

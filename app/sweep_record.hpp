@@ -31,7 +31,9 @@ struct PointRecord {
     double cl = 0.0, cd = 0.0, cm = 0.0;  ///< surface route (pressure + friction)
     /// What cl, cd and cm are: "converged steady" (with "; kept by a time-accurate check"),
     /// "settled time-accurate", "mean over N whole cycles", "mean over the second half of the
-    /// record", "final instant of the time-accurate run" or "not converged". Never a comma:
+    /// record", "final instant of the time-accurate run", "settled in a bounded cycle: ..."
+    /// (app/bounded_cycle.hpp; status "bounded cycle", the half band in the amplitudes) or
+    /// "not converged". Never a comma:
     /// polar.csv writes it unquoted.
     std::string cl_basis = "converged steady";
     /// The converged steady Cl when the point's result is a later time-accurate one.
