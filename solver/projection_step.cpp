@@ -146,7 +146,10 @@ void fill_report(FlowSolverCore& s, double dt, bool steady, StepReport& r) {
 }  // namespace
 
 StepReport FlowSolverCore::step(double dt, bool steady, double nominal_dt) {
-    const bool second = !steady && steps > 0;
+    // Second order needs a previous physical step: a steady history (a time-accurate run
+    // restarted from a steady checkpoint) has none (its dt_previous is 0), so it starts first
+    // order.
+    const bool second = !steady && steps > 0 && dt_previous > 0.0;
     const BdfCoefficients c = bdf_coefficients(second, dt, dt_previous);
     if (steady && steps % settings.local_step_interval == 0) refresh_local_steps();
     const double t_new = steady ? time : time + dt;
