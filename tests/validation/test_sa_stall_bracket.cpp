@@ -69,7 +69,8 @@ TEST_F(SaStallBracket, ClMaxHasALowerClOnEachSideWithinHalfADegree) {
     ASSERT_GT(alpha.size(), 3u) << "the search added no point to 8, 12, 16";
     const double am = summary.at("alpha_cl_max").get<double>();
     const double m = summary.at("cl_max").get<double>();
-    EXPECT_DOUBLE_EQ(m, *std::max_element(cl.begin(), cl.end()));
+    // polar.csv keeps 8 significant digits (summary.json all of them): equal to that rounding.
+    EXPECT_NEAR(m, *std::max_element(cl.begin(), cl.end()), 1e-7 * std::abs(m));
     bool below = false, above = false;
     for (std::size_t k = 0; k < alpha.size(); ++k) {
         std::cout << "alpha " << alpha[k] << ": Cl " << cl[k] << " (x 1.0114 = " << 1.0114 * cl[k]
