@@ -11,20 +11,17 @@
 #include "app/sweep_point.hpp"
 #include "app_test_support.hpp"
 #include "io/case_file.hpp"
+#include "stalling_sweep.hpp"
 
 namespace veer {
 namespace {
 
 TEST(SweepBoundedCycle, StalledPointInsideTheBandReportsTheWindowMean) {
-    // The tiny case stalled at step 20 by criteria no iteration meets (test_sweep_plateau.cpp),
+    // The tiny case stalled at step 20 by criteria no iteration meets (stalling_sweep.hpp),
     // judged over its last 10 iterations with a band wide enough for any start-up (a test of
     // the bookkeeping, not of the band's size: test_bounded_cycle.cpp covers that).
     test::AppScratch tmp;
-    std::string text = test::tiny_case_text();
-    text.replace(text.find("steps = 5"), 9, "steps = 500\nend_time = 0.05");
-    test::write_text(tmp / "c.toml", text);
-    SweepCase sweep{read_case_source(tmp / "c.toml"), {}, 0, 0.0, false};
-    sweep.plateau = {20, 1e30, 0.0, 10};
+    SweepCase sweep = test::stalling_tiny_sweep(tmp);
     sweep.cycle = {10, 100.0, 100.0, 0, 1.0};
     const CaseSpec spec = point_case(sweep, 4.0);
     const StructuredGrid grid = build_mesh(spec).grid;

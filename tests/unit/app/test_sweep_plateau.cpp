@@ -13,6 +13,7 @@
 #include "app/sweep_point.hpp"
 #include "app_test_support.hpp"
 #include "io/case_file.hpp"
+#include "stalling_sweep.hpp"
 
 namespace veer {
 namespace {
@@ -101,11 +102,7 @@ TEST(SweepPlateau, StalledSteadyPointGoesTimeAccurateAtTheStall) {
     // the steady attempt must end at step 20, far before its cap of 500, and the point continue
     // time-accurately.
     test::AppScratch tmp;
-    std::string text = test::tiny_case_text();
-    text.replace(text.find("steps = 5"), 9, "steps = 500\nend_time = 0.05");
-    test::write_text(tmp / "c.toml", text);
-    SweepCase sweep{read_case_source(tmp / "c.toml"), {}, 0, 0.0, false};
-    sweep.plateau = {20, 1e30, 0.0, 10};
+    SweepCase sweep = test::stalling_tiny_sweep(tmp);
     const CaseSpec spec = point_case(sweep, 4.0);
     const StructuredGrid grid = build_mesh(spec).grid;
     const PointOutcome out = run_sweep_point(sweep, 4.0, spec, grid, tmp / "sw", nullptr, "");

@@ -7,6 +7,7 @@
 #include <functional>
 
 #include "analytic_flows.hpp"
+#include "joukowski_cgrid_flow.hpp"
 #include "mesh/grid_metrics.hpp"
 #include "postprocess/circulation.hpp"
 #include "postprocess/control_volume.hpp"
@@ -93,14 +94,10 @@ TEST(ControlVolume, JoukowskiFlowGivesKuttaJoukowskiLift) {
 
 TEST(LiftRoutes, AllThreeRoutesAgreeOnTheJoukowskiFlow) {
     const test::Joukowski section = test::Joukowski{1.0, 0.1, 0.0, 5.0}.prepare();
-    test::TestCGridShape shape;
-    shape.wake = 32;
-    shape.nj = 128;
-    shape.normal_stretch = 5.0;
-    const StructuredGrid grid = test::make_test_cgrid(section.surface(256), shape);
-    const GridMetrics m = compute_metrics(grid);
-    const FlowFields f =
-        test::sample_potential_flow(m, [&](Vec2 p) { return section.velocity(p); });
+    const test::SampledFlow sampled = test::joukowski_on_cgrid(section, 256, 32, 128);
+    const StructuredGrid& grid = sampled.grid;
+    const GridMetrics& m = sampled.metrics;
+    const FlowFields& f = sampled.fields;
     // Potential flow slips along the wall, so its two-cell "wall shear" is meaningless: a
     // Reynolds number of 1e12 makes friction (and the contour's viscous part) vanish.
     const FlowConditions conditions{1e12, 5.0};

@@ -4,6 +4,7 @@
 #include <cmath>
 
 #include "analytic_flows.hpp"
+#include "joukowski_cgrid_flow.hpp"
 #include "mesh/grid_metrics.hpp"
 #include "postprocess/kutta_check.hpp"
 #include "test_cgrid.hpp"
@@ -13,14 +14,10 @@ namespace {
 
 KuttaCheck joukowski_check(test::Joukowski section, double circulation_factor, int around) {
     section.circulation_factor = circulation_factor;
-    test::TestCGridShape shape;
-    shape.wake = 16;
-    shape.nj = 64;
-    shape.normal_stretch = 5.0;
-    const StructuredGrid grid = test::make_test_cgrid(section.surface(around), shape);
-    const GridMetrics m = compute_metrics(grid);
-    const FlowFields f =
-        test::sample_potential_flow(m, [&](Vec2 p) { return section.velocity(p); });
+    const test::SampledFlow sampled = test::joukowski_on_cgrid(section, around, 16, 64);
+    const StructuredGrid& grid = sampled.grid;
+    const GridMetrics& m = sampled.metrics;
+    const FlowFields& f = sampled.fields;
     return kutta_check(surface_distribution(grid, m, f, {1e6, section.alpha_deg}));
 }
 

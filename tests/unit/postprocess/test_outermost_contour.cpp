@@ -7,6 +7,7 @@
 #include <iostream>
 
 #include "analytic_flows.hpp"
+#include "joukowski_cgrid_flow.hpp"
 #include "mesh/grid_metrics.hpp"
 #include "postprocess/outermost_contour.hpp"
 #include "postprocess/surface_forces.hpp"
@@ -17,14 +18,10 @@ namespace {
 
 TEST(OutermostContour, LiesOnTheLastInteriorLinesAndBalancesTheJoukowskiLift) {
     const test::Joukowski section = test::Joukowski{1.0, 0.1, 0.0, 5.0}.prepare();
-    test::TestCGridShape shape;
-    shape.wake = 32;
-    shape.nj = 128;
-    shape.normal_stretch = 5.0;
-    const StructuredGrid grid = test::make_test_cgrid(section.surface(256), shape);
-    const GridMetrics m = compute_metrics(grid);
-    const FlowFields f =
-        test::sample_potential_flow(m, [&](Vec2 p) { return section.velocity(p); });
+    const test::SampledFlow sampled = test::joukowski_on_cgrid(section, 256, 32, 128);
+    const StructuredGrid& grid = sampled.grid;
+    const GridMetrics& m = sampled.metrics;
+    const FlowFields& f = sampled.fields;
     const GridContour c = outermost_contour(grid);
     EXPECT_EQ(c.line_j, grid.nj() - 1);  // the largest j line a contour may use
     EXPECT_EQ(c.cut_i, 1);               // and the wake crossing nearest the outlets
