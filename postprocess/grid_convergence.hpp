@@ -21,7 +21,8 @@ enum class ConvergenceVerdict {
     monotone,            ///< reasonable observed order: Fs 1.25 with it
     order_out_of_range,  ///< monotone, but p outside [formal - 1, formal + 1]: conservative band
     oscillatory,         ///< e21 and e32 of opposite sign: conservative band, no extrapolation
-    unchanged,           ///< the same value on the three grids: no error visible
+    unchanged,           ///< the same value on the three grids (changes within 1e-9 of
+                         ///< max(1, |value|): round-off): no error visible
 };
 
 struct GridConvergence {
