@@ -24,11 +24,6 @@ const std::array<std::pair<const char*, const char*>, 9> figure_keys = {{
     {"transition_lower", "lower transition x/c"},
 }};
 
-std::optional<double> number_at(const nlohmann::json& s, const char* key) {
-    if (!s.contains(key) || !s[key].is_number()) return std::nullopt;
-    return s[key].get<double>();
-}
-
 nlohmann::json or_null(const std::optional<double>& v) {
     return v ? nlohmann::json(*v) : nlohmann::json(nullptr);
 }
@@ -64,7 +59,7 @@ nlohmann::json grid_json(const StudyRun& r) {
                         {"spacing", r.spacing},
                         {"converged", r.converged()},
                         {"origin", origin_words(r.origin)},
-                        {"iterations", r.summary.value("iterations", 0L)}};
+                        {"iterations", static_cast<long>(r.number("iterations").value_or(0.0))}};
     g["first_cell"] = or_null(r.grid.first_cell);
     g["y_plus"] = or_null(r.grid.y_plus);
     return g;
@@ -90,7 +85,7 @@ std::vector<StudyFigure> study_figures(const std::vector<StudyRun>& runs,
         f.label = label;
         bool all = true, any = false;
         for (const StudyRun& r : runs) {
-            f.values.push_back(number_at(r.summary, key));
+            f.values.push_back(r.number(key));
             all = all && f.values.back().has_value();
             any = any || f.values.back().has_value();
         }
@@ -98,7 +93,7 @@ std::vector<StudyFigure> study_figures(const std::vector<StudyRun>& runs,
         if (all && runs.size() == 3)
             f.convergence = grid_convergence({runs[0].spacing, runs[1].spacing, runs[2].spacing},
                                              {*f.values[0], *f.values[1], *f.values[2]});
-        if (far_boundary) f.far_boundary_value = number_at(far_boundary->summary, key);
+        if (far_boundary) f.far_boundary_value = far_boundary->number(key);
         out.push_back(std::move(f));
     }
     return out;

@@ -2,6 +2,8 @@
 
 #include <fmt/format.h>
 
+#include <nlohmann/json.hpp>
+
 #include "app/mesh_pipeline.hpp"
 #include "io/case_file.hpp"
 #include "io/json_writer.hpp"
@@ -25,6 +27,12 @@ bool has_converged_summary(const fs::path& dir) {
 }
 
 }  // namespace
+
+std::optional<double> StudyRun::number(const std::string& key) const {
+    const auto it = numbers.find(key);
+    if (it == numbers.end()) return std::nullopt;
+    return it->second;
+}
 
 const char* origin_words(RunOrigin origin) {
     switch (origin) {
@@ -83,7 +91,10 @@ StudyRun run_study_grid(const CaseOptions& input, const StudyGrid& grid, const f
             "grid study: the {} grid's run in {} diverged or left no summary.json; see its "
             "history.csv, and try a smaller refinement ratio or a finer case grid",
             grid.name, dir.string()));
-    run.summary = read_json_file(dir / "summary.json");
+    const nlohmann::json summary = read_json_file(dir / "summary.json");
+    for (const auto& [key, value] : summary.items())
+        if (value.is_number()) run.numbers[key] = value.get<double>();
+    run.converged_run = summary.value("converged", false);
     fmt::print("grid study: {} grid {}\n", grid.name, origin_words(run.origin));
     return run;
 }

@@ -4,7 +4,8 @@
 /// case text continues from it; otherwise the grid is run afresh through `veer run`'s own path
 /// (so the folder rules, --force included, are the same).
 #include <filesystem>
-#include <nlohmann/json.hpp>
+#include <map>
+#include <optional>
 #include <string>
 
 #include "app/commands.hpp"
@@ -23,9 +24,14 @@ struct StudyRun {
     std::filesystem::path dir;
     RunOrigin origin = RunOrigin::computed;
     long cells = 0;
-    double spacing = 0.0;    ///< h = sqrt(sum of cell areas / cells), Celik et al. 2008 step 1
-    nlohmann::json summary;  ///< the run's summary.json
-    bool converged() const { return summary.value("converged", false); }
+    double spacing = 0.0;  ///< h = sqrt(sum of cell areas / cells), Celik et al. 2008 step 1
+    /// What the study reads from the run's summary.json: its numeric entries by key, and whether
+    /// it converged. (Not the JSON document itself: its destructor may allocate, which would make
+    /// this struct's implicit noexcept move and destructor able to throw.)
+    std::map<std::string, double> numbers;
+    bool converged_run = false;
+    bool converged() const { return converged_run; }
+    std::optional<double> number(const std::string& key) const;
 };
 
 /// Runs (or reuses) `grid` of the case `input` in `dir`. Throws InputError when the run diverged
