@@ -7,9 +7,9 @@
 namespace veer {
 
 ResidualPlateau::ResidualPlateau(PlateauCriteria criteria) : m_criteria(criteria) {
-    VEER_VERIFY(
-        m_criteria.window >= 20 && m_criteria.required_drop > 1.0 && m_criteria.check_every > 0,
-        "plateau criteria out of range");
+    VEER_VERIFY(m_criteria.window >= 20 && m_criteria.required_drop > 1.0 &&
+                    m_criteria.check_every > 0 && m_criteria.frozen_level > 0.0,
+                "plateau criteria out of range");
 }
 
 bool ResidualPlateau::add(double relative_residual, double cl) {
@@ -34,7 +34,10 @@ void ResidualPlateau::evaluate() {
     m_drop = last > 0.0 ? first / last : first > 0.0 ? 1e300 : 1.0;
     const auto [lo, hi] = std::minmax_element(m_cl.begin() + n / 2, m_cl.end());
     m_lift_range = *hi - *lo;
-    m_stalled = m_drop < m_criteria.required_drop && m_lift_range > m_criteria.force_tolerance;
+    const bool flat = m_drop < m_criteria.required_drop;
+    const bool lift_moves = m_lift_range > m_criteria.force_tolerance;
+    m_frozen = flat && !lift_moves && last > m_criteria.frozen_level;
+    m_stalled = (flat && lift_moves) || m_frozen;
 }
 
 }  // namespace veer

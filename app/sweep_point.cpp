@@ -104,7 +104,12 @@ std::string periodicity_note(const ForceRecord& h) {
 
 /// Why a steady attempt did not converge: stalled (the plateau rule) or at its step cap.
 std::string not_settled_note(const SweepCase& sweep, const CaseSpec& spec, bool stalled,
-                             long steps) {
+                             bool frozen, long steps) {
+    if (frozen)
+        return fmt::format(
+            "the steady iteration froze (its residual stayed above {:g} of its reference over {} "
+            "iterations while Cl stood still: a cycle of a few cells) after {} iterations",
+            sweep.plateau.frozen_level, sweep.plateau.window, steps);
     return stalled ? fmt::format(
                          "the steady iteration stalled (its residual fell less than {:g} times "
                          "over {} iterations while Cl kept moving) after {} iterations",
@@ -321,7 +326,8 @@ PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const CaseSpe
             return out;
         case RunStatus::step_cap:
             if (steady_mode && !cycle) {
-                r.note = not_settled_note(sweep, spec, stalled, p.result.steps);
+                r.note = not_settled_note(sweep, spec, stalled, stalled && plateau->frozen(),
+                                          p.result.steps);
                 const TimeAccurateStart from{p.sim->solver().fields(), 0.0, 0.0};
                 run_time_accurate(r, out, sweep, alpha, grid, dir, from, label);
                 if (out.interrupted) return out;
@@ -335,7 +341,8 @@ PointOutcome run_sweep_point(const SweepCase& sweep, double alpha, const CaseSpe
             r.cm = p.result.forces.cm.total;
             if (cycle)
                 take_bounded_cycle(r, *cycle,
-                                   not_settled_note(sweep, spec, stalled, p.result.steps));
+                                   not_settled_note(sweep, spec, stalled,
+                                                    stalled && plateau->frozen(), p.result.steps));
             r.cl_momentum = p.momentum_lift();
             if (p.analysis) add_separation(r, *p.analysis);
             out.fields = p.sim->solver().fields();

@@ -78,6 +78,25 @@ TEST(ResidualPlateau, ResidualFloorWithStillLiftIsNotAStall) {
     EXPECT_EQ(at, 0);
 }
 
+TEST(ResidualPlateau, FrozenCycleFarAboveAnyFloorIsAStall) {
+    // The frozen two-step cycle measured on a 128 x 32 SA grid (residual_plateau.hpp): the
+    // relative residual alternates about 0.13 and never falls, Cl alternates by 1e-8.
+    ResidualPlateau d({3000, 10.0, 1e-5, 100});
+    const long at = first_stall(
+        d, 6000, [](long n) { return 0.13 * (1.0 + 0.01 * double(n % 2)); },
+        [](long n) { return 0.22132 + 1e-8 * double(n % 2); });
+    EXPECT_EQ(at, 3000);
+    EXPECT_TRUE(d.frozen());
+    // The same flat residual at 1e-4 (below the frozen level, above a converged floor) with a
+    // still lift is left to the step cap, as a floor is.
+    ResidualPlateau floor({3000, 10.0, 1e-5, 100});
+    EXPECT_EQ(first_stall(
+                  floor, 6000, [](long n) { return 1e-4 * (1.0 + 0.01 * double(n % 2)); },
+                  [](long n) { return 0.22132 + 1e-8 * double(n % 2); }),
+              0);
+    EXPECT_FALSE(floor.frozen());
+}
+
 TEST(ResidualPlateau, ConvergenceThatStallsIsFoundOnceTheStallFillsTheWindow) {
     // Falling tenfold every 200 steps until step 1500, flat afterwards with the lift swinging.
     // A 1000-step window ending at step N has its first-tenth minimum at N - 900 and its
@@ -95,6 +114,7 @@ TEST(ResidualPlateau, ConvergenceThatStallsIsFoundOnceTheStallFillsTheWindow) {
 TEST(ResidualPlateau, BadCriteriaAreRefused) {
     EXPECT_THROW(ResidualPlateau({10, 10.0, 1e-5, 100}), std::exception);
     EXPECT_THROW(ResidualPlateau({1000, 1.0, 1e-5, 100}), std::exception);
+    EXPECT_THROW(ResidualPlateau({1000, 10.0, 1e-5, 100, 0.0}), std::exception);
 }
 
 TEST(SweepPlateau, StalledSteadyPointGoesTimeAccurateAtTheStall) {
