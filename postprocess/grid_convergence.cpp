@@ -75,6 +75,9 @@ GridConvergence grid_convergence(std::array<double, 3> spacing, std::array<doubl
                           *std::min_element(values.begin(), values.end());
     if (e21 != 0.0 && e32 / e21 < 0.0) {
         g.verdict = ConvergenceVerdict::oscillatory;
+    } else if (e21 != 0.0 &&
+               std::abs(e32 / e21) <= std::log(g.ratio_coarse) / std::log(g.ratio_fine)) {
+        g.verdict = ConvergenceVerdict::diverging;  // see the header: no positive order fits
     } else if (e21 == 0.0) {
         g.verdict = ConvergenceVerdict::order_out_of_range;  // fine pair equal: p unbounded
         g.order = std::numeric_limits<double>::infinity();
@@ -92,7 +95,8 @@ GridConvergence grid_convergence(std::array<double, 3> spacing, std::array<doubl
     if (!reasonable) g.band = std::max(g.band, 0.5 * spread);
     g.gci_fine =
         values[0] != 0.0 ? g.band / std::abs(values[0]) : std::numeric_limits<double>::infinity();
-    g.extrapolated_valid = g.verdict != ConvergenceVerdict::oscillatory;
+    g.extrapolated_valid =
+        g.verdict != ConvergenceVerdict::oscillatory && g.verdict != ConvergenceVerdict::diverging;
     g.extrapolated = g.extrapolated_valid ? (rp * values[0] - values[1]) / (rp - 1.0) : values[0];
     g.extrapolated_error =
         g.extrapolated != 0.0 ? std::abs((g.extrapolated - values[0]) / g.extrapolated) : 0.0;
@@ -115,6 +119,8 @@ const char* verdict_name(ConvergenceVerdict verdict) {
             return "order out of range";
         case ConvergenceVerdict::oscillatory:
             return "oscillatory";
+        case ConvergenceVerdict::diverging:
+            return "diverging";
         case ConvergenceVerdict::unchanged:
             return "unchanged";
     }
@@ -141,6 +147,15 @@ std::string verdict_text(const GridConvergence& g) {
                           "extrapolation; conservative band (factor 3, order %.0f, at least half "
                           "the spread)",
                           g.formal_order);
+            break;
+        case ConvergenceVerdict::diverging:
+            std::snprintf(text, sizeof text,
+                          "diverging (the changes do not shrink with the grid: %.3g between "
+                          "the finer two, %.3g between the coarser two): not in the asymptotic "
+                          "range; no "
+                          "extrapolation; conservative band (factor 3, order %.0f, at least half "
+                          "the spread)",
+                          g.values[1] - g.values[0], g.values[2] - g.values[1], g.formal_order);
             break;
         case ConvergenceVerdict::unchanged:
             std::snprintf(text, sizeof text,

@@ -10,6 +10,14 @@
 /// second-order scheme). Outside it the coarse grid is likely outside the asymptotic range, so the
 /// band is the conservative one: Fs = 3 with the formal order (Roache 2011), and never less than
 /// half the spread of the three values (common practice for oscillatory convergence).
+///
+/// Diverging: the formula's outer absolute value gives a positive p even when the changes grow as
+/// the grid is refined (|e21| larger than |e32| on a constant ratio), which no converging sequence
+/// does: for monotone convergence with p > 0, |e32 / e21| = r21^p (r32^p - 1) / (r21^p - 1), which
+/// exceeds its p -> 0 limit ln r32 / ln r21. At or below that limit the values are called
+/// diverging (the classification by the convergence ratio e21 / e32 into monotone convergence,
+/// oscillation and divergence: Stern, Wilson, Coleman & Paterson 2001, J. Fluids Eng. 123,
+/// 793-802, recalled from memory), with the conservative band and no extrapolation.
 #include <array>
 #include <span>
 #include <string>
@@ -21,8 +29,10 @@ enum class ConvergenceVerdict {
     monotone,            ///< reasonable observed order: Fs 1.25 with it
     order_out_of_range,  ///< monotone, but p outside [formal - 1, formal + 1]: conservative band
     oscillatory,         ///< e21 and e32 of opposite sign: conservative band, no extrapolation
-    unchanged,           ///< the same value on the three grids (changes within 1e-9 of
-                         ///< max(1, |value|): round-off): no error visible
+    diverging,  ///< same sign, but the changes grow as the grid is refined: conservative band,
+                ///< no extrapolation
+    unchanged,  ///< the same value on the three grids (changes within 1e-9 of
+                ///< max(1, |value|): round-off): no error visible
 };
 
 struct GridConvergence {
@@ -34,7 +44,7 @@ struct GridConvergence {
     double order = 0.0;               ///< observed p; 0 when unchanged
     double order_used = 0.0;          ///< the p in the band: observed, or the formal order
     double safety_factor = 0.0;       ///< 1.25 or 3
-    bool extrapolated_valid = false;  ///< false for oscillatory or unchanged values
+    bool extrapolated_valid = false;  ///< false for oscillatory, diverging or unchanged values
     double extrapolated = 0.0;    ///< phi_ext = (r21^p phi1 - phi2) / (r21^p - 1), p = order_used
     double relative_error = 0.0;  ///< e_a = |(phi1 - phi2) / phi1|
     double extrapolated_error = 0.0;  ///< e_ext = |(phi_ext - phi1) / phi_ext|
@@ -54,7 +64,8 @@ double representative_spacing(std::span<const double> cell_areas);
 /// One plain sentence for a reader, e.g. "converging, observed order 2.03 (formal 2)".
 std::string verdict_text(const GridConvergence& g);
 
-/// A short word for tables and files: "monotone", "order out of range", "oscillatory", "unchanged".
+/// A short word for tables and files: "monotone", "order out of range", "oscillatory",
+/// "diverging", "unchanged".
 const char* verdict_name(ConvergenceVerdict verdict);
 
 }  // namespace veer

@@ -136,5 +136,33 @@ TEST(GridConvergence, RepresentativeSpacingFromCellAreas) {
     EXPECT_THROW(representative_spacing(std::vector<double>{}), std::invalid_argument);
 }
 
+TEST(GridConvergence, ChangesThatGrowWithRefinementAreDiverging) {
+    // NACA 0012, SA, Re 6e6, alpha 10 on 1088 x 320, 768 x 228 and 544 x 160 (measured here):
+    // Cl 1.07388, 1.07422, 1.07444. The fine pair differs by 3.4e-4, the coarse pair by 2.2e-4;
+    // the absolute value in Celik et al.'s formula turned that into "converging, order 1.32".
+    const GridConvergence g =
+        grid_convergence({0.27656, 0.38869, 0.54782}, {1.07388, 1.07422, 1.07444});
+    EXPECT_EQ(g.verdict, ConvergenceVerdict::diverging);
+    EXPECT_FALSE(g.extrapolated_valid);
+    EXPECT_EQ(g.extrapolated, 1.07388);
+    EXPECT_EQ(g.safety_factor, 3.0);
+    EXPECT_EQ(g.order_used, 2.0);
+    const double roache = 3.0 * (1.07422 - 1.07388) / (std::pow(0.38869 / 0.27656, 2) - 1.0);
+    EXPECT_NEAR(g.band, std::max(roache, 0.5 * (1.07444 - 1.07388)), 1e-12);
+    EXPECT_NE(verdict_text(g).find("diverging"), std::string::npos) << verdict_text(g);
+    EXPECT_STREQ(verdict_name(g.verdict), "diverging");
+    // Just converging on a constant ratio (changes shrinking by 1 %) is not diverging; and on
+    // unequal ratios the edge is ln r32 / ln r21, not 1: equal changes over r21 = 1.5, r32 = 1.2
+    // converge (the finer step is the longer one in ln h) ...
+    EXPECT_EQ(grid_convergence({1.0, 1.4, 1.96}, {1.0, 1.0100, 1.0201}).verdict,
+              ConvergenceVerdict::order_out_of_range);
+    const GridConvergence unequal = grid_convergence({1.0, 1.5, 1.8}, {1.0, 1.01, 1.02});
+    EXPECT_NE(unequal.verdict, ConvergenceVerdict::diverging);
+    EXPECT_GT(unequal.order, 0.0);
+    // ... while with the ratios the other way round the same values diverge.
+    EXPECT_EQ(grid_convergence({1.0, 1.2, 1.8}, {1.0, 1.01, 1.02}).verdict,
+              ConvergenceVerdict::diverging);
+}
+
 }  // namespace
 }  // namespace veer
