@@ -31,8 +31,8 @@ enum class ConvergenceVerdict {
     oscillatory,         ///< e21 and e32 of opposite sign: conservative band, no extrapolation
     diverging,  ///< same sign, but the changes grow as the grid is refined: conservative band,
                 ///< no extrapolation
-    unchanged,  ///< the same value on the three grids (changes within 1e-9 of
-                ///< max(1, |value|): round-off): no error visible
+    unchanged,  ///< the same value on the three grids (changes within 1e-7 of
+                ///< max(1, |value|), below a run's iterative error): no error visible
 };
 
 struct GridConvergence {
