@@ -47,8 +47,6 @@ void check_settings(const FlowConditions& c, const SolverSettings& s) {
         fail("steady_pressure_tolerance", s.steady_pressure_tolerance, "in (0, 1)");
     if (!(s.vortex_relaxation >= 0.0 && s.vortex_relaxation <= 1.0))
         fail("vortex_relaxation", s.vortex_relaxation, "in [0, 1]");
-    if (!(s.vortex_time_constant > 0.0))
-        fail("vortex_time_constant", s.vortex_time_constant, "> 0");
 }
 
 /// A model's variable names become checkpoint arrays, VTK arrays and history columns.

@@ -66,8 +66,7 @@ struct FlowSolverCore {
     void apply_local_steps();
     void setup_uniform_pressure();
     StepReport step(double dt, bool steady, double nominal_dt = 0.0);
-    /// Moves the circulation `fraction` of the way to the wall force's Gamma = L' / (rho U_inf).
-    void update_vortex(double fraction);
+    void update_vortex();
     void advance_model(double dt, bool steady, StepReport& r);
     void update_face_eddy_viscosity();
     /// A steady scheme that under-relaxes the eddy viscosity of a turbulence model (the relaxed

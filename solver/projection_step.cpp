@@ -218,9 +218,7 @@ StepReport FlowSolverCore::step(double dt, bool steady, double nominal_dt) {
     dt_previous = dt;
     time = t_new;
     ++steps;
-    if (vortex_active)
-        update_vortex(steady ? settings.vortex_relaxation
-                             : 1.0 - std::exp(-dt / settings.vortex_time_constant));
+    if (vortex_active) update_vortex();
     advance_model(dt, steady, r);
     r.step = steps;
     r.time = time;
@@ -276,12 +274,12 @@ void FlowSolverCore::update_face_eddy_viscosity() {
         eddy_j[k] += factor * (eddy_target_j[k] - eddy_j[k]);
 }
 
-void FlowSolverCore::update_vortex(double fraction) {
+void FlowSolverCore::update_vortex() {
     fill_pressure_ghosts(faces, connectivity, pressure.view());
     const Vec2 force = wall_force(geom, faces, vel.u.view(), vel.v.view(), pressure.view(), nu);
     const Vec2 lift_dir{-free_stream.y, free_stream.x};
     const double gamma_estimate = dot(force, lift_dir);  // L' / (rho U_inf), U_inf = 1
-    circulation += fraction * (gamma_estimate - circulation);
+    circulation += settings.vortex_relaxation * (gamma_estimate - circulation);
 }
 
 }  // namespace veer

@@ -55,18 +55,9 @@ struct SolverSettings {
     int pressure_max_iterations = 200;
 
     // Far field of lifting sections (grids with a C-grid layout).
-    bool far_field_vortex = true;   ///< Thomas & Salas 1986 point-vortex correction
-    Vec2 vortex_center{0.25, 0.0};  ///< quarter chord (chords)
-    /// Steady mode: fraction of the lift-based update taken each pseudo step.
-    double vortex_relaxation = 0.05;
-    /// Time-accurate mode: the circulation follows the lift-based value in physical time,
-    /// dGamma/dt = (Gamma_lift - Gamma) / vortex_time_constant (chords / U_inf), whatever the
-    /// step. A fraction per step made the loop gain grow as 1/dt (a change of the far-field
-    /// velocity moves the wall pressure by about its rate of change), and on a y+ 1 NACA 0012
-    /// grid at CFL 0.8 (dt 3e-5) Cl alternated and grew threefold per step; that loop is
-    /// neutral at a time constant of 0.002 there (app/SWEEPS.md), so 0.05 keeps a margin of 25.
-    /// 0.05 is also about what 0.05 per step gave the laminar runs at Re 1000 (dt 2.5e-3).
-    double vortex_time_constant = 0.05;
+    bool far_field_vortex = true;     ///< Thomas & Salas 1986 point-vortex correction
+    Vec2 vortex_center{0.25, 0.0};    ///< quarter chord (chords)
+    double vortex_relaxation = 0.05;  ///< fraction of the lift-based update taken each step
 
     /// The turbulence model (flow_model.hpp, model_registry.hpp): its eddy viscosity enters
     /// the momentum diffusion; its variables are advanced after each projection step.
