@@ -154,9 +154,8 @@ std::string verdict_text(const GridConvergence& g) {
             std::snprintf(text, sizeof text,
                           "diverging (the changes do not shrink with the grid: %.3g between "
                           "the finer two, %.3g between the coarser two): not in the asymptotic "
-                          "range; no "
-                          "extrapolation; conservative band (factor 3, order %.0f, at least half "
-                          "the spread)",
+                          "range; no extrapolation; conservative band (factor 3, order %.0f, at "
+                          "least half the spread)",
                           g.values[1] - g.values[0], g.values[2] - g.values[1], g.formal_order);
             break;
         case ConvergenceVerdict::unchanged:
