@@ -4,7 +4,9 @@
 #include <sstream>
 
 #include "mesh/errors.hpp"
+#include "mesh/face_order.hpp"
 #include "mesh/geometric_stretching.hpp"
+#include "mesh/grid_metrics.hpp"
 #include "mesh/normal_marching.hpp"
 #include "mesh/wake_cut.hpp"
 #include "mesh/wake_spacing.hpp"
@@ -44,6 +46,24 @@ std::string describe_fold(const MarchOutcome& fold, const CGridSpec& spec) {
     out << "; use more normal cells (normal = " << spec.normal << "), a smaller first_cell ("
         << spec.first_cell << "), a smaller far_field (" << spec.far_field
         << ") or more cells around a sharply curved section";
+    return out.str();
+}
+
+/// Where a backward face lies (face_order.hpp), in words a user can act on (one short line).
+std::string describe_backward_face(const BackwardFace& face, const CGridSpec& spec) {
+    const int i_surface = face.i - spec.wake;
+    std::ostringstream out;
+    out.precision(4);
+    out << "mesh: cells at (" << face.i << ", " << face.j << ") near (" << face.where.x << ", "
+        << face.where.y << "), " << (face.j >= spec.normal * 3 / 4 ? "by the far field " : "");
+    if (i_surface < 0 || i_surface >= spec.around)
+        out << "above the wake";
+    else
+        out << "off the " << (i_surface < spec.around / 2 ? "lower" : "upper") << " surface";
+    out << ", are too sheared: their centres lie on the wrong sides of a face; use more wake cells "
+           "(wake = "
+        << spec.wake << "), more normal cells (" << spec.normal << ") or fewer around ("
+        << spec.around << ")";
     return out.str();
 }
 
@@ -106,6 +126,8 @@ StructuredGrid generate_cgrid(const std::vector<Vec2>& surface, const CGridSpec&
     }
     open_wake_spacing(grid, spec.wake, spec.first_cell, spec.wake_aspect);
     fill_segments(grid, spec.wake, spec.around);
+    if (const auto face = find_backward_face(compute_metrics(grid)))
+        throw InputError(describe_backward_face(*face, spec));
     return grid;
 }
 

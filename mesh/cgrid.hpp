@@ -31,7 +31,8 @@ public:
 /// r = normal_growth_ratio(spec), so its length is far_field. Segments: j_min "wake_cut_lower",
 /// "wall", "wake_cut_upper"; i_min "outflow_lower"; i_max "outflow_upper"; j_max "far_field".
 /// Throws InputError for a spec value out of range (naming the key), GridFoldError when the
-/// layers would fold (naming where, and what to change).
+/// layers would fold (naming where, and what to change), InputError when a face would not lie
+/// between its two cell centres (face_order.hpp; naming where, and what to change).
 StructuredGrid generate_cgrid(const std::vector<Vec2>& surface, const CGridSpec& spec);
 
 /// The wall-normal growth ratio r with first_cell * (1 + r + ... + r^(normal-1)) = far_field.
