@@ -6,9 +6,11 @@
 #include <unistd.h>
 
 #include <cerrno>
+#include <chrono>
 #include <cstring>
 #include <ctime>
 #include <string>
+#include <thread>
 
 #include "mesh/errors.hpp"
 
@@ -27,13 +29,19 @@ std::string owner_line() {
     return "pid " + std::to_string(::getpid()) + " on " + host + ", started " + when;
 }
 
-/// What the holder wrote into the lock file (its first line, bounded).
+/// What the holder wrote into the lock file (its first line, bounded). A holder writes its line
+/// just after taking the lock, so an empty file is read again for up to half a second: two runs
+/// started at once otherwise met an empty file in about one try of thirty.
 std::string holder_of(int fd) {
-    char text[512] = "";
-    const ssize_t got = ::pread(fd, text, sizeof text - 1, 0);
-    std::string line(text, got > 0 ? static_cast<std::size_t>(got) : 0);
-    line = line.substr(0, line.find('\n'));
-    return line.empty() ? "a run that is still starting" : line;
+    for (int attempt = 0; attempt < 100; ++attempt) {
+        char text[512] = "";
+        const ssize_t got = ::pread(fd, text, sizeof text - 1, 0);
+        std::string line(text, got > 0 ? static_cast<std::size_t>(got) : 0);
+        line = line.substr(0, line.find('\n'));
+        if (!line.empty()) return line;
+        std::this_thread::sleep_for(std::chrono::milliseconds(5));
+    }
+    return "a run that is still starting";
 }
 
 /// True when `fd` is still the file at `path` (a releasing run may have just removed it).

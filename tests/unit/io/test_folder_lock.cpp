@@ -1,10 +1,14 @@
 // One run per output folder: the second is refused with a message naming the first; the lock of a
 // process that died is taken over (the kernel released it).
+#include <fcntl.h>
 #include <gtest/gtest.h>
+#include <sys/file.h>
 #include <unistd.h>
 
+#include <chrono>
 #include <fstream>
 #include <string>
+#include <thread>
 
 #include "io/folder_lock.hpp"
 #include "io/output_dir.hpp"
@@ -27,6 +31,30 @@ TEST(FolderLock, ASecondLockOnTheFolderIsRefusedNamingTheFirst) {
         EXPECT_NE(why.find("started 20"), std::string::npos) << why;
         EXPECT_NE(why.find(dir.path().string()), std::string::npos) << why;
     }
+}
+
+TEST(FolderLock, AHolderThatHasNotYetWrittenItsLineIsStillNamed) {
+    // A run that has just taken the lock writes its line a moment later; one started at the same
+    // moment must wait for the line rather than call the holder "still starting".
+    test::ScratchDir dir;
+    const std::string file = (dir / FolderLock::file_name).string();
+    const int fd = ::open(file.c_str(), O_RDWR | O_CREAT | O_CLOEXEC, 0644);
+    ASSERT_GE(fd, 0);
+    ASSERT_EQ(::flock(fd, LOCK_EX | LOCK_NB), 0);
+    std::thread writer([fd] {
+        std::this_thread::sleep_for(std::chrono::milliseconds(50));
+        const std::string line = "pid 4242 on elsewhere, started 2026-12-04 18:00:00 UTC\n";
+        EXPECT_EQ(::pwrite(fd, line.data(), line.size(), 0), static_cast<ssize_t>(line.size()));
+    });
+    try {
+        const FolderLock second(dir.path());
+        ADD_FAILURE() << "two locks on one folder";
+    } catch (const InputError& e) {
+        const std::string why = e.what();
+        EXPECT_NE(why.find("pid 4242"), std::string::npos) << why;
+    }
+    writer.join();
+    ::close(fd);
 }
 
 TEST(FolderLock, ReleasedWithItsOwnerAndStaleFilesAreTakenOver) {
