@@ -33,16 +33,18 @@ void fill_segments(StructuredGrid& grid, int wake, int around) {
     grid.c_layout() = CGridLayout{wake, around};
 }
 
+/// Which part of the C-grid column i belongs to: above the wake cut, or off which surface.
+std::string region_of_column(int i, const CGridSpec& spec) {
+    const int i_surface = i - spec.wake;
+    if (i_surface < 0 || i_surface >= spec.around) return "above the wake cut";
+    return std::string("off the ") + (i_surface < spec.around / 2 ? "lower" : "upper") + " surface";
+}
+
 /// Where a fold lies, in words a user can act on.
 std::string describe_fold(const MarchOutcome& fold, const CGridSpec& spec) {
-    const int i_surface = fold.i - spec.wake;
     std::ostringstream out;
     out << "mesh: the C-grid folds at cell (" << fold.i << ", " << fold.j << ") near ("
-        << fold.where.x << ", " << fold.where.y << "), ";
-    if (i_surface < 0 || i_surface >= spec.around)
-        out << "above the wake cut";
-    else
-        out << "off the " << (i_surface < spec.around / 2 ? "lower" : "upper") << " surface";
+        << fold.where.x << ", " << fold.where.y << "), " << region_of_column(fold.i, spec);
     out << "; use more normal cells (normal = " << spec.normal << "), a smaller first_cell ("
         << spec.first_cell << "), a smaller far_field (" << spec.far_field
         << ") or more cells around a sharply curved section";
@@ -51,16 +53,12 @@ std::string describe_fold(const MarchOutcome& fold, const CGridSpec& spec) {
 
 /// Where a backward face lies (face_order.hpp), in words a user can act on (one short line).
 std::string describe_backward_face(const BackwardFace& face, const CGridSpec& spec) {
-    const int i_surface = face.i - spec.wake;
     std::ostringstream out;
     out.precision(4);
     out << "mesh: cells at (" << face.i << ", " << face.j << ") near (" << face.where.x << ", "
-        << face.where.y << "), " << (face.j >= spec.normal * 3 / 4 ? "by the far field " : "");
-    if (i_surface < 0 || i_surface >= spec.around)
-        out << "above the wake";
-    else
-        out << "off the " << (i_surface < spec.around / 2 ? "lower" : "upper") << " surface";
-    out << ", are too sheared: their centres lie on the wrong sides of a face; use more wake cells "
+        << face.where.y << "), " << (face.j >= spec.normal * 3 / 4 ? "by the far field " : "")
+        << region_of_column(face.i, spec)
+        << ", are too sheared: their centres lie on the wrong sides of a face; use more wake cells "
            "(wake = "
         << spec.wake << "), more normal cells (" << spec.normal << ") or fewer around ("
         << spec.around << ")";
